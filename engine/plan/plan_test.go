@@ -1,0 +1,114 @@
+package plan
+
+import (
+	"encoding/json"
+	"maps"
+	"slices"
+	"testing"
+	"time"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"nodelife/engine/scenario"
+)
+
+func TestFormatSpan(t *testing.T) {
+	day := func(s string) time.Time {
+		d, err := time.Parse(time.DateOnly, s)
+		require.NoError(t, err)
+		return d
+	}
+	cases := []struct{ a, b, want string }{
+		{"2027-03-01", "2032-01-12", "4 y 10 mo"},
+		{"2027-03-01", "2032-03-01", "5 y"},
+		{"2027-03-01", "2032-02-28", "4 y 11 mo"}, // a day short of 5 years
+		{"2027-01-31", "2027-02-28", "28 d"},      // no 31 February: not yet a month
+		{"2027-01-31", "2027-03-03", "1 mo"},
+		{"2027-01-01", "2027-01-13", "12 d"},
+		{"2027-01-01", "2027-11-01", "10 mo"},
+		{"2028-02-29", "2029-02-28", "11 mo"},
+		{"2027-01-02", "2027-01-01", "0 d"},
+	}
+	for _, c := range cases {
+		assert.Equalf(t, c.want, FormatSpan(day(c.a), day(c.b)), "FormatSpan(%s, %s)", c.a, c.b)
+	}
+}
+
+func TestResultOfDemo(t *testing.T) {
+	s := scenario.Demo()
+	r := Run(s)
+	require.NotNil(t, r.LifetimeDays)
+	require.NotNil(t, r.FirstBrownout)
+	start, _ := time.Parse(time.DateOnly, r.Start)
+	// The flat date is the start plus the lifetime.
+	flat := start.Add(time.Duration(*r.LifetimeDays * 24 * float64(time.Hour)))
+	assert.Equal(t, flat.Format(time.DateOnly), *r.FirstBrownout)
+	assert.Equal(t, FormatSpan(start, flat), r.Lifetime)
+	require.NotEmpty(t, r.Swaps)
+	assert.Less(t, r.Swaps[0].Date, *r.FirstBrownout, "the first swap comes before the cells go flat")
+	assert.Equal(t, "reserve", r.Swaps[0].Reason)
+	// The ledger in the result balances.
+	e := r.EnergyWh
+	in := e.Installed + e.Harvested - e.HarvestUnused - e.ChargeLoss
+	out := e.Load + e.SelfDischarge + e.SwappedOut + e.Remaining
+	assert.InEpsilon(t, in, out, 1e-9)
+	var byComp float64
+	for _, wh := range e.LoadByComponent {
+		byComp += wh
+	}
+	assert.InEpsilon(t, e.Load, byComp, 1e-12)
+	assert.Equal(t, []string{"events", "regulator", "sleep", "vision"}, slices.Sorted(maps.Keys(e.LoadByComponent)))
+	// One daily row per day of the horizon.
+	end, _ := time.Parse(time.DateOnly, r.End)
+	assert.Len(t, r.Daily, int(end.Sub(start).Hours()/24+0.5))
+	assert.Contains(t, codes(r), "lithium-primary")
+
+	// The JSON keys are the documented ones.
+	b, err := json.Marshal(r)
+	require.NoError(t, err)
+	var m map[string]any
+	require.NoError(t, json.Unmarshal(b, &m))
+	for _, k := range []string{"lifetime_days", "first_brownout", "swaps", "min_soc_pct", "energy_wh", "cautions", "daily"} {
+		assert.Contains(t, m, k)
+	}
+	for _, k := range []string{"load", "self_discharge", "harvested", "harvest_unused", "charge_loss", "remaining", "load_by_component"} {
+		assert.Contains(t, m["energy_wh"], k)
+	}
+}
+
+func TestOutlivingCellsGiveNull(t *testing.T) {
+	s := scenario.Demo()
+	s.Plan.Years = 2
+	b, err := json.Marshal(Run(s))
+	require.NoError(t, err)
+	var m map[string]any
+	require.NoError(t, json.Unmarshal(b, &m))
+	assert.Nil(t, m["lifetime_days"])
+	assert.Nil(t, m["first_brownout"])
+	assert.Equal(t, []any{}, m["swaps"])
+	assert.Equal(t, "more than 2 y", m["lifetime"])
+}
+
+func TestCautions(t *testing.T) {
+	s := scenario.Demo()
+	s.Site.Placement, s.Site.FixedTempC = scenario.Fixed, -30
+	s.Cells.Chemistry, s.Cells.Form = "alkaline", "D"
+	r := Run(s)
+	assert.Contains(t, codes(r), "outside-rated-temperature") // alkaline rated from −18 °C
+	assert.Contains(t, codes(r), "cold-capacity")
+	assert.NotContains(t, codes(r), "lithium-primary")
+
+	s = scenario.Demo()
+	s.Cells.Chemistry, s.Cells.Form = "li-ion", "18650"
+	assert.Contains(t, codes(Run(s)), "rechargeable-without-harvest")
+	assert.NotContains(t, codes(Run(s)), "outside-rated-temperature")
+}
+
+func codes(r Result) []string {
+	var cs []string
+	for _, c := range r.Cautions {
+		cs = append(cs, c.Code)
+	}
+	return cs
+}

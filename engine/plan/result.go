@@ -1,0 +1,151 @@
+package plan
+
+import (
+	"fmt"
+	"math"
+	"time"
+
+	"nodelife/engine/load"
+	"nodelife/engine/scenario"
+	"nodelife/engine/sim"
+)
+
+// ResultFormat names the result's format and version.
+const ResultFormat = "nodelife.result/1"
+
+// Result is the answer for one scenario. Field names are the JSON keys of
+// `nodelife plan --json`, documented in the README.
+type Result struct {
+	Format        string    `json:"format"`
+	Scenario      string    `json:"scenario"`
+	Start         string    `json:"start"`
+	End           string    `json:"end"`
+	LifetimeDays  *float64  `json:"lifetime_days"`
+	Lifetime      string    `json:"lifetime"`
+	FirstBrownout *string   `json:"first_brownout"`
+	Swaps         []Swap    `json:"swaps"`
+	MinSoCPct     float64   `json:"min_soc_pct"`
+	PackWh        float64   `json:"pack_wh"`
+	PackMAh       float64   `json:"pack_mah"`
+	PackV         float64   `json:"pack_v"`
+	AverageLoadMW float64   `json:"average_load_mw"`
+	TempMinC      float64   `json:"temp_min_c"`
+	TempMaxC      float64   `json:"temp_max_c"`
+	EnergyWh      Energy    `json:"energy_wh"`
+	Cautions      []Caution `json:"cautions"`
+	Daily         []Day     `json:"daily"`
+}
+
+// Swap is one planned change of cells.
+type Swap struct {
+	Date   string `json:"date"`
+	Reason string `json:"reason"`
+}
+
+// Energy is the ledger over the horizon, Wh.
+type Energy struct {
+	Installed       float64            `json:"installed"`
+	Load            float64            `json:"load"`
+	LoadByComponent map[string]float64 `json:"load_by_component"`
+	SelfDischarge   float64            `json:"self_discharge"`
+	Harvested       float64            `json:"harvested"`
+	HarvestUnused   float64            `json:"harvest_unused"`
+	ChargeLoss      float64            `json:"charge_loss"`
+	SwappedOut      float64            `json:"swapped_out"`
+	Remaining       float64            `json:"remaining"`
+}
+
+// Day is one local day of the planned cells.
+type Day struct {
+	Date       string  `json:"date"`
+	SoCMinPct  float64 `json:"soc_min_pct"`
+	SoCMeanPct float64 `json:"soc_mean_pct"`
+	SoCMaxPct  float64 `json:"soc_max_pct"`
+	TempMinC   float64 `json:"temp_min_c"`
+	TempMeanC  float64 `json:"temp_mean_c"`
+	TempMaxC   float64 `json:"temp_max_c"`
+}
+
+// Caution is a warning the user must see, with a stable code.
+type Caution struct {
+	Code    string `json:"code"`
+	Message string `json:"message"`
+}
+
+// Run simulates the scenario and builds its result.
+func Run(s scenario.Scenario) Result {
+	return FromSim(s, sim.Run(s))
+}
+
+// FromSim builds the result of a finished simulation.
+func FromSim(s scenario.Scenario, r sim.Result) Result {
+	out := Result{
+		Format:        ResultFormat,
+		Scenario:      s.Name,
+		Start:         r.Start.Format(time.DateOnly),
+		End:           r.End.Format(time.DateOnly),
+		Swaps:         []Swap{},
+		MinSoCPct:     r.MinSoCPct,
+		PackWh:        r.Pack.EnergyWh(),
+		PackMAh:       r.Pack.CapacityMAh(),
+		PackV:         r.Pack.NominalV(),
+		AverageLoadMW: r.LoadW.Total() * 1e3,
+		TempMinC:      r.TempMinC,
+		TempMaxC:      r.TempMaxC,
+		Cautions:      Cautions(s, r),
+		Daily:         make([]Day, len(r.Days)),
+	}
+	if r.Flat.IsZero() {
+		out.Lifetime = "more than " + FormatSpan(r.Start, r.End)
+	} else {
+		days := r.Flat.Sub(r.Start).Hours() / 24
+		date := r.Flat.Format(time.DateOnly)
+		out.LifetimeDays, out.FirstBrownout = &days, &date
+		out.Lifetime = FormatSpan(r.Start, r.Flat)
+	}
+	for _, sw := range r.Swaps {
+		out.Swaps = append(out.Swaps, Swap{Date: sw.Time.Format(time.DateOnly), Reason: sw.Reason})
+	}
+	l := r.Ledger
+	out.EnergyWh = Energy{
+		Installed: l.InstalledWh, Load: l.LoadWh.Total(), SelfDischarge: l.SelfDischargeWh,
+		Harvested: l.HarvestedWh, HarvestUnused: l.HarvestUnusedWh, ChargeLoss: l.ChargeLossWh,
+		SwappedOut: l.SwappedOutWh, Remaining: l.RemainingWh,
+		LoadByComponent: map[string]float64{},
+	}
+	for c := load.Component(0); c < load.NumComponents; c++ {
+		out.EnergyWh.LoadByComponent[c.String()] = l.LoadWh[c]
+	}
+	for i, d := range r.Days {
+		out.Daily[i] = Day{Date: d.Date.Format(time.DateOnly),
+			SoCMinPct: round3(d.SoCMinPct), SoCMeanPct: round3(d.SoCMeanPct), SoCMaxPct: round3(d.SoCMaxPct),
+			TempMinC: round3(d.TempMinC), TempMeanC: round3(d.TempMeanC), TempMaxC: round3(d.TempMaxC)}
+	}
+	return out
+}
+
+func round3(x float64) float64 { return math.Round(x*1000) / 1000 }
+
+// FormatSpan writes the calendar time from a to b as "4 y 7 mo", "7 mo" or,
+// under a month, "12 d". Whole months are counted on the calendar; a part
+// month is dropped.
+func FormatSpan(a, b time.Time) string {
+	if b.Before(a) {
+		return "0 d"
+	}
+	months := (b.Year()-a.Year())*12 + int(b.Month()-a.Month())
+	if a.AddDate(0, months, 0).After(b) {
+		months--
+	}
+	if months < 1 {
+		return fmt.Sprintf("%d d", int(b.Sub(a).Hours()/24))
+	}
+	y, mo := months/12, months%12
+	switch {
+	case y == 0:
+		return fmt.Sprintf("%d mo", mo)
+	case mo == 0:
+		return fmt.Sprintf("%d y", y)
+	}
+	return fmt.Sprintf("%d y %d mo", y, mo)
+}

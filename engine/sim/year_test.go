@@ -1,0 +1,66 @@
+package sim
+
+import (
+	"testing"
+	"time"
+
+	"github.com/stretchr/testify/assert"
+
+	"nodelife/engine/scenario"
+)
+
+func TestYearLayout(t *testing.T) {
+	s := scenario.Demo()
+	s.Plan.StepMin = 10
+	y := NewYear(s)
+	assert.Equal(t, 10, y.ResMin)
+	assert.Len(t, y.TempC, 366*144)
+	at := func(v string) int {
+		tm, err := time.Parse(time.RFC3339, v)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return y.Index(tm)
+	}
+	assert.Equal(t, 0, at("2031-01-01T00:00:00Z"))
+	assert.Equal(t, 59*144, at("2028-02-29T00:09:59Z"), "29 February has its own row")
+	assert.Equal(t, 60*144+1, at("2031-03-01T00:10:00Z"), "1 March is row 60 in every year")
+	assert.Equal(t, 365*144+143, at("2030-12-31T23:59:00Z"))
+	assert.Equal(t, at("2031-03-01T00:10:00Z"), at("2031-03-01T01:10:00+01:00"), "rows follow UTC")
+	// Steps that do not divide the day use the largest divisor of 1440 below them.
+	for step, want := range map[int]int{1: 1, 7: 6, 10: 10, 11: 10, 25: 24, 45: 45, 50: 48, 60: 60} {
+		assert.Equal(t, want, resolutionFor(step), "step %d", step)
+	}
+}
+
+func TestYearOutdoorUsesSolarTime(t *testing.T) {
+	s := scenario.Demo()
+	s.Site.Placement = scenario.Outdoor
+	s.Site.OutdoorMeanC, s.Site.OutdoorAnnualRangeC, s.Site.OutdoorDailyRangeC = 0, 0, 10
+	s.Site.LonDeg = 90 // solar time is UTC + 6 h
+	y := NewYear(s)
+	// The daily maximum is at 15:00 solar time = 09:00 UTC; the slot from
+	// 08:55 to 09:05 is not on the grid, so look at 09:00–09:10 (midpoint 09:05).
+	hot := y.TempC[row(6, 1)*y.PerDay+9*6]
+	cold := y.TempC[row(6, 1)*y.PerDay+21*6]
+	assert.InDelta(t, 5, hot, 0.01)
+	assert.InDelta(t, -5, cold, 0.01)
+}
+
+func TestRunWithSharedYear(t *testing.T) {
+	s := scenario.Demo()
+	y := NewYear(s)
+	a := RunWith(s, y)
+	s.Node.Vision.FPS = 10 // a node edit leaves the site's table valid
+	b := RunWith(s, y)
+	assert.Equal(t, Run(s).Flat, b.Flat)
+	assert.True(t, b.Flat.Before(a.Flat))
+}
+
+func BenchmarkNewYearOutdoor(b *testing.B) {
+	s := scenario.Demo()
+	s.Site.Placement = scenario.Outdoor
+	for b.Loop() {
+		NewYear(s)
+	}
+}

@@ -1,0 +1,263 @@
+// Command nodelife plans battery life and cell swaps for always-on camera
+// sensor nodes, and serves the browser app.
+//
+//	nodelife plan [--json] SCENARIO.json   plan one node ("-" reads standard input)
+//	nodelife cells [--json]                the cell library with its sources
+//	nodelife demo                          print the built-in demo scenario
+//	nodelife schema                        print the scenario format's JSON Schema
+//	nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
+//
+// Exit status: 0 on success, 2 on bad input (the message names the file, the
+// JSON path, the value and what is allowed), 1 on any other failure.
+package main
+
+import (
+	"encoding/json"
+	"errors"
+	"flag"
+	"fmt"
+	"io"
+	"net"
+	"net/http"
+	"os"
+	"sort"
+	"strings"
+	"time"
+
+	"nodelife/engine/cell"
+	"nodelife/engine/load"
+	"nodelife/engine/plan"
+	"nodelife/engine/scenario"
+	"nodelife/static"
+)
+
+// usageError is bad input from the user: exit status 2.
+type usageError struct{ msg string }
+
+func (e usageError) Error() string { return e.msg }
+
+func main() {
+	os.Exit(run(os.Args[1:], os.Stdin, os.Stdout, os.Stderr))
+}
+
+const usage = `nodelife plans battery life and cell swaps for always-on camera sensor nodes.
+
+usage:
+  nodelife plan [--json] SCENARIO.json   plan one node ("-" reads standard input)
+  nodelife cells [--json]                the cell library with its sources
+  nodelife demo                          print the built-in demo scenario
+  nodelife schema                        print the scenario format's JSON Schema
+  nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
+`
+
+// run is main without the process: it returns the exit status.
+func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	if len(args) == 0 {
+		fmt.Fprint(stderr, usage)
+		return 2
+	}
+	var err error
+	switch args[0] {
+	case "plan":
+		err = cmdPlan(args[1:], stdin, stdout)
+	case "cells":
+		err = cmdCells(args[1:], stdout)
+	case "demo":
+		_, err = stdout.Write(scenario.DemoJSON())
+	case "schema":
+		_, err = stdout.Write(scenario.Schema())
+	case "serve":
+		err = cmdServe(args[1:], stdout)
+	case "help", "-h", "--help":
+		fmt.Fprint(stdout, usage)
+	default:
+		err = usageError{fmt.Sprintf("unknown command %q\n\n%s", args[0], usage)}
+	}
+	if err == nil {
+		return 0
+	}
+	var ue usageError
+	if errors.As(err, &ue) {
+		fmt.Fprintln(stderr, "nodelife: "+err.Error())
+		return 2
+	}
+	fmt.Fprintln(stderr, "nodelife: "+err.Error())
+	return 1
+}
+
+func newFlags(name string) *flag.FlagSet {
+	fs := flag.NewFlagSet(name, flag.ContinueOnError)
+	fs.SetOutput(io.Discard)
+	return fs
+}
+
+func parseFlags(fs *flag.FlagSet, args []string) error {
+	if err := fs.Parse(args); err != nil {
+		return usageError{fmt.Sprintf("%s: %v", fs.Name(), err)}
+	}
+	return nil
+}
+
+func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
+	fs := newFlags("plan")
+	asJSON := fs.Bool("json", false, "print the result as JSON")
+	// Accept the flag after the file name too: nodelife plan FILE --json.
+	var files []string
+	for len(args) > 0 {
+		if err := parseFlags(fs, args); err != nil {
+			return err
+		}
+		args = fs.Args()
+		if len(args) > 0 {
+			files, args = append(files, args[0]), args[1:]
+		}
+	}
+	if len(files) != 1 {
+		return usageError{"plan: give one scenario file (\"-\" reads standard input); `nodelife demo` prints an example"}
+	}
+	name := files[0]
+	var data []byte
+	var err error
+	if name == "-" {
+		name = "standard input"
+		data, err = io.ReadAll(stdin)
+	} else {
+		data, err = os.ReadFile(name)
+	}
+	if err != nil {
+		return usageError{err.Error()}
+	}
+	s, err := scenario.Parse(data)
+	if err != nil {
+		var lines []string
+		for _, line := range strings.Split(err.Error(), "\n") {
+			lines = append(lines, name+": "+line)
+		}
+		return usageError{strings.Join(lines, "\nnodelife: ")}
+	}
+	r := plan.Run(s)
+	if *asJSON {
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(r)
+	}
+	_, err = io.WriteString(stdout, summary(s, r))
+	return err
+}
+
+// summary is the human-readable answer.
+func summary(s scenario.Scenario, r plan.Result) string {
+	var b strings.Builder
+	row := func(label, format string, args ...any) {
+		fmt.Fprintf(&b, "  %-14s%s\n", label, fmt.Sprintf(format, args...))
+	}
+	fmt.Fprintf(&b, "%s\n", r.Scenario)
+	if r.FirstBrownout != nil {
+		row("Lasts", "%s: cells flat on %s if nobody swaps them", r.Lifetime, *r.FirstBrownout)
+	} else {
+		row("Lasts", "%s: the cells outlive the %d-year plan", r.Lifetime, s.Plan.Years)
+	}
+	if len(r.Swaps) > 0 {
+		row("First swap", "%s (state of charge down to the %g %% reserve)", r.Swaps[0].Date, s.Plan.ReservePct)
+		var dates []string
+		for _, sw := range r.Swaps {
+			dates = append(dates, sw.Date)
+		}
+		row("Swaps", "%d in the plan, %s to %s: %s", len(r.Swaps), r.Start, r.End, strings.Join(dates, ", "))
+	} else {
+		row("Swaps", "none in the plan, %s to %s", r.Start, r.End)
+	}
+	chem, _ := cell.Lookup(s.Cells.Chemistry)
+	row("Cells", "%d in series × %d in parallel, %s %s; pack %.0f mAh, %.1f V, %.1f Wh", s.Cells.Series, s.Cells.Parallel,
+		s.Cells.Form, chem.Name, r.PackMAh, r.PackV, r.PackWh)
+	// Load shares, largest first.
+	type share struct {
+		name string
+		wh   float64
+	}
+	var shares []share
+	for c := load.Component(0); c < load.NumComponents; c++ {
+		shares = append(shares, share{c.String(), r.EnergyWh.LoadByComponent[c.String()]})
+	}
+	sort.SliceStable(shares, func(i, j int) bool { return shares[i].wh > shares[j].wh })
+	var parts []string
+	for _, sh := range shares {
+		if r.EnergyWh.Load > 0 {
+			parts = append(parts, fmt.Sprintf("%s %.0f %%", sh.name, sh.wh/r.EnergyWh.Load*100))
+		}
+	}
+	row("Average load", "%.3g mW from the cells (%s)", r.AverageLoadMW, strings.Join(parts, ", "))
+	row("Temperature", "%.0f to %.0f °C at the cells", r.TempMinC, r.TempMaxC)
+	e := r.EnergyWh
+	row("Energy, Wh", "installed %.1f, load %.1f, self-discharge %.1f, swapped out %.1f, remaining %.1f",
+		e.Installed, e.Load, e.SelfDischarge, e.SwappedOut, e.Remaining)
+	if len(r.Cautions) > 0 {
+		b.WriteString("Cautions\n")
+		for _, c := range r.Cautions {
+			fmt.Fprintf(&b, "  - %s\n", c.Message)
+		}
+	}
+	b.WriteString("A planning aid: confirm with the cell maker's datasheet and a field measurement.\n")
+	return b.String()
+}
+
+func cmdCells(args []string, stdout io.Writer) error {
+	fs := newFlags("cells")
+	asJSON := fs.Bool("json", false, "print the library as JSON")
+	if err := parseFlags(fs, args); err != nil {
+		return err
+	}
+	lib := cell.Library()
+	if *asJSON {
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(map[string]any{"chemistries": lib})
+	}
+	var b strings.Builder
+	for _, c := range lib {
+		kind := "rechargeable"
+		if c.Primary {
+			kind = "primary, never charge"
+		}
+		fmt.Fprintf(&b, "%s: %s (%s)\n", c.ID, c.Name, kind)
+		fmt.Fprintf(&b, "  %.2g V nominal, %.2g V mean, %.2g V cut-off; self-discharge %.3g %%/yr at 20 °C; rated %.0f to %.0f °C\n",
+			c.NominalV, c.MeanDischargeV, c.CutoffV, c.SelfDischargePerYear*100, c.OperatingMinC, c.OperatingMaxC)
+		var forms []string
+		for _, f := range c.Forms {
+			forms = append(forms, fmt.Sprintf("%s %.0f mAh", f.Name, f.CapacityMAh))
+		}
+		fmt.Fprintf(&b, "  forms: %s\n", strings.Join(forms, ", "))
+		var temps []string
+		for _, p := range c.CapacityVsTemp {
+			temps = append(temps, fmt.Sprintf("%g °C %.0f %%", p.TempC, p.Fraction*100))
+		}
+		fmt.Fprintf(&b, "  usable capacity: %s\n", strings.Join(temps, ", "))
+		for _, s := range c.Sources {
+			fmt.Fprintf(&b, "  source, %s: %s\n", s.Field, s.Text)
+		}
+	}
+	_, err := io.WriteString(stdout, b.String())
+	return err
+}
+
+func cmdServe(args []string, stdout io.Writer) error {
+	fs := newFlags("serve")
+	addr := fs.String("addr", "127.0.0.1:8080", "address to listen on")
+	if err := parseFlags(fs, args); err != nil {
+		return err
+	}
+	ln, err := net.Listen("tcp", *addr)
+	if err != nil {
+		return err
+	}
+	if host, _, _ := net.SplitHostPort(ln.Addr().String()); !net.ParseIP(host).IsLoopback() {
+		fmt.Fprintf(stdout, "note: %s is reachable from other machines\n", host)
+	}
+	h := static.Handler(static.Files, static.Extra{
+		"/scenario.schema.json": scenario.Schema(),
+		"/demo.json":            scenario.DemoJSON(),
+	})
+	fmt.Fprintf(stdout, "nodelife: serving the app on http://%s/ (Ctrl-C stops)\n", ln.Addr())
+	srv := &http.Server{Handler: h, ReadHeaderTimeout: 10 * time.Second}
+	return srv.Serve(ln)
+}

@@ -1,0 +1,206 @@
+package ui
+
+import (
+	"math"
+	"time"
+
+	"nodelife/engine/plan"
+)
+
+// TimeScale maps calendar time onto x.
+type TimeScale struct {
+	Start, End time.Time
+	X0, X1     float64
+}
+
+// X returns the x of t.
+func (s TimeScale) X(t time.Time) float64 {
+	span := s.End.Sub(s.Start).Seconds()
+	if span <= 0 {
+		return s.X0
+	}
+	return s.X0 + (s.X1-s.X0)*t.Sub(s.Start).Seconds()/span
+}
+
+// LinearScale maps a value range onto a pixel range (Y0 for V0, Y1 for V1).
+type LinearScale struct {
+	V0, V1 float64
+	Y0, Y1 float64
+}
+
+// Y returns the pixel of v.
+func (s LinearScale) Y(v float64) float64 {
+	return s.Y0 + (s.Y1-s.Y0)*(v-s.V0)/(s.V1-s.V0)
+}
+
+// Tick is one labelled mark on an axis.
+type Tick struct {
+	At    time.Time // for date ticks
+	Value float64   // for value ticks
+	Pos   float64   // x or y, CSS px
+	Label string
+	Major bool // a year boundary on a date axis
+}
+
+// monthTicksMaxMonths is the longest horizon that gets month ticks: beyond
+// three years they crowd the years out.
+const monthTicksMaxMonths = 36.5
+
+// tickStepsMonths are the date tick spacings tried, finest first.
+var tickStepsMonths = []int{1, 2, 3, 6, 12, 24, 60}
+
+// DateTicks returns ticks at the first of a month between s.Start and s.End
+// (inclusive), as fine as the labels allow: each step must leave minGapPx
+// between tick positions. Ticks on 1 January are Major and labelled with the
+// year; others with the month ("Apr"). Month ticks are used only on
+// horizons up to monthTicksMaxMonths; longer ones mark years. Dates are taken
+// in s.Start's location.
+func DateTicks(s TimeScale, minGapPx float64) []Tick {
+	months := s.End.Sub(s.Start).Hours() / 24 / (365.25 / 12)
+	if months <= 0 {
+		return nil
+	}
+	pxPerMonth := (s.X1 - s.X0) / months
+	step := tickStepsMonths[len(tickStepsMonths)-1]
+	for _, st := range tickStepsMonths {
+		if st < 12 && months > monthTicksMaxMonths {
+			continue
+		}
+		if float64(st)*pxPerMonth >= minGapPx {
+			step = st
+			break
+		}
+	}
+	loc := s.Start.Location()
+	t := time.Date(s.Start.Year(), s.Start.Month(), 1, 0, 0, 0, 0, loc)
+	if t.Before(s.Start) {
+		t = t.AddDate(0, 1, 0)
+	}
+	var ticks []Tick
+	for ; !t.After(s.End); t = t.AddDate(0, 1, 0) {
+		if step >= 12 {
+			if t.Month() != time.January || t.Year()%(step/12) != 0 {
+				continue
+			}
+		} else if (int(t.Month())-1)%step != 0 {
+			continue
+		}
+		tk := Tick{At: t, Pos: s.X(t), Major: t.Month() == time.January}
+		if tk.Major {
+			tk.Label = t.Format("2006")
+		} else {
+			tk.Label = t.Format("Jan")
+		}
+		ticks = append(ticks, tk)
+	}
+	return ticks
+}
+
+// PercentTicks returns ticks for a 0–100 % axis: every 25 % when the axis is
+// at least minGapPx × 4 tall, else every 50 %.
+func PercentTicks(s LinearScale, minGapPx float64) []Tick {
+	step := 25.0
+	if math.Abs(s.Y(0)-s.Y(25)) < minGapPx {
+		step = 50
+	}
+	var ticks []Tick
+	for v := 0.0; v <= 100; v += step {
+		ticks = append(ticks, Tick{Value: v, Pos: s.Y(v), Label: FormatNumber(v)})
+	}
+	return ticks
+}
+
+// Column is the days that fall in one pixel column of the chart: the lowest
+// and highest state of charge and the mean of the daily means, in %.
+type Column struct {
+	X              float64 // the column's centre
+	Min, Mean, Max float64
+}
+
+// Columns bins the daily summaries into columns colW wide along s, so a long
+// horizon draws one band slice per column and keeps every extreme.
+func Columns(days []plan.Day, s TimeScale, colW float64) []Column {
+	var cols []Column
+	n := 0
+	cur := -1
+	for _, d := range days {
+		t, err := time.ParseInLocation(time.DateOnly, d.Date, s.Start.Location())
+		if err != nil {
+			continue
+		}
+		x := s.X(t.Add(12 * time.Hour)) // the day's middle
+		i := int(math.Floor((x - s.X0) / colW))
+		if i != cur {
+			if n > 0 {
+				cols[len(cols)-1].Mean /= float64(n)
+			}
+			cols = append(cols, Column{X: s.X0 + (float64(i)+0.5)*colW, Min: d.SoCMinPct, Max: d.SoCMaxPct})
+			cur, n = i, 0
+		}
+		c := &cols[len(cols)-1]
+		c.Min = math.Min(c.Min, d.SoCMinPct)
+		c.Max = math.Max(c.Max, d.SoCMaxPct)
+		c.Mean += d.SoCMeanPct
+		n++
+	}
+	if n > 0 {
+		cols[len(cols)-1].Mean /= float64(n)
+	}
+	return cols
+}
+
+// LabelSpot is where a marker's label goes: its left edge and lane, or
+// Lane -1 when there is no room for it.
+type LabelSpot struct {
+	Left float64
+	Lane int
+}
+
+// LabelWant asks for a label of width W beside a marker at X, on the first
+// of Lanes with room for it.
+type LabelWant struct {
+	X, W  float64
+	Lanes []int
+}
+
+// PlaceLabels puts marker labels on lanes in the order given (so the first
+// have the first pick). A label starts pad right of its marker, or ends pad
+// left of it when it would cross hi; it must stay within lo..hi, keep gap
+// from labels already placed on its lane, and not cover a marker shape
+// drawn on that lane (shapes[lane] lists their x; a marker's own shape does
+// not count).
+func PlaceLabels(wants []LabelWant, shapes [][]float64, lo, hi, pad, gap float64) []LabelSpot {
+	taken := make([][][2]float64, len(shapes)) // occupied spans per lane
+	spots := make([]LabelSpot, len(wants))
+	fits := func(lane int, l, w, own float64) bool {
+		if l < lo || l+w > hi {
+			return false
+		}
+		for _, sp := range taken[lane] {
+			if l < sp[1]+gap && sp[0] < l+w+gap {
+				return false
+			}
+		}
+		for _, x := range shapes[lane] {
+			if x != own && l < x+pad && x-pad < l+w {
+				return false
+			}
+		}
+		return true
+	}
+	for i, w := range wants {
+		spots[i] = LabelSpot{Lane: -1}
+		l := w.X + pad
+		if l+w.W > hi {
+			l = w.X - pad - w.W
+		}
+		for _, lane := range w.Lanes {
+			if fits(lane, l, w.W, w.X) {
+				spots[i] = LabelSpot{Left: l, Lane: lane}
+				taken[lane] = append(taken[lane], [2]float64{l, l + w.W})
+				break
+			}
+		}
+	}
+	return spots
+}
