@@ -6,6 +6,8 @@
 //	nodelife demo                          print the built-in demo scenario
 //	nodelife schema                        print the scenario format's JSON Schema
 //	nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
+//	nodelife sun --lat D --lon D --time RFC3339 [--json]
+//	                                       the sun's position and the day's events
 //
 // Exit status: 0 on success, 2 on bad input (the message names the file, the
 // JSON path, the value and what is allowed), 1 on any other failure.
@@ -17,9 +19,11 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"math"
 	"net"
 	"net/http"
 	"os"
+	"path/filepath"
 	"sort"
 	"strings"
 	"time"
@@ -28,6 +32,9 @@ import (
 	"nodelife/engine/load"
 	"nodelife/engine/plan"
 	"nodelife/engine/scenario"
+	"nodelife/engine/sky"
+	"nodelife/engine/sun"
+	"nodelife/engine/weather"
 	"nodelife/static"
 )
 
@@ -48,6 +55,9 @@ usage:
   nodelife demo                          print the built-in demo scenario
   nodelife schema                        print the scenario format's JSON Schema
   nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
+  nodelife sun --lat D --lon D --time RFC3339 [--json]
+                                         the sun's position at a place and instant,
+                                         and that local day's sunrise, noon and sunset
 `
 
 // run is main without the process: it returns the exit status.
@@ -68,6 +78,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		_, err = stdout.Write(scenario.Schema())
 	case "serve":
 		err = cmdServe(args[1:], stdout)
+	case "sun":
+		err = cmdSun(args[1:], stdout)
 	case "help", "-h", "--help":
 		fmt.Fprint(stdout, usage)
 	default:
@@ -129,13 +141,16 @@ func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
 	}
 	s, err := scenario.Parse(data)
 	if err != nil {
-		var lines []string
-		for _, line := range strings.Split(err.Error(), "\n") {
-			lines = append(lines, name+": "+line)
-		}
-		return usageError{strings.Join(lines, "\nnodelife: ")}
+		return usageError{prefixLines(name, err)}
 	}
-	r := plan.Run(s)
+	in, err := readInputs(s, name, files[0] == "-")
+	if err != nil {
+		return err
+	}
+	r, err := plan.RunWith(s, in)
+	if err != nil {
+		return usageError{prefixLines(name, err)}
+	}
 	if *asJSON {
 		enc := json.NewEncoder(stdout)
 		enc.SetIndent("", "  ")
@@ -143,6 +158,46 @@ func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
 	}
 	_, err = io.WriteString(stdout, summary(s, r))
 	return err
+}
+
+// prefixLines puts the file name before each line of an error, as
+// "FILE: path: problem", one problem a line.
+func prefixLines(name string, err error) string {
+	var lines []string
+	for _, line := range strings.Split(err.Error(), "\n") {
+		lines = append(lines, name+": "+line)
+	}
+	return strings.Join(lines, "\nnodelife: ")
+}
+
+// readInputs reads the files a scenario names, relative to the scenario
+// file's folder (the working folder for standard input).
+func readInputs(s scenario.Scenario, scenarioPath string, stdin bool) (plan.Inputs, error) {
+	var in plan.Inputs
+	if s.Site.WeatherFile == "" {
+		return in, nil
+	}
+	p := s.Site.WeatherFile
+	if !filepath.IsAbs(p) && !stdin {
+		p = filepath.Join(filepath.Dir(scenarioPath), p)
+	}
+	f, err := os.Open(p)
+	if err != nil {
+		return in, usageError{fmt.Sprintf("site.weather_file: %v", err)}
+	}
+	defer f.Close()
+	switch strings.ToLower(filepath.Ext(p)) {
+	case ".epw":
+		in.Weather, err = weather.ReadEPW(p, f)
+	case ".csv":
+		in.Weather, err = weather.ReadTMY3(p, f)
+	default:
+		return in, usageError{fmt.Sprintf("site.weather_file: %q is not a weather file (allowed: a TMY3 file ending .csv or an EPW file ending .epw)", s.Site.WeatherFile)}
+	}
+	if err != nil {
+		return in, usageError{err.Error()}
+	}
+	return in, nil
 }
 
 // summary is the human-readable answer.
@@ -260,4 +315,86 @@ func cmdServe(args []string, stdout io.Writer) error {
 	fmt.Fprintf(stdout, "nodelife: serving the app on http://%s/ (Ctrl-C stops)\n", ln.Addr())
 	srv := &http.Server{Handler: h, ReadHeaderTimeout: 10 * time.Second}
 	return srv.Serve(ln)
+}
+
+// sunReport is the JSON of `nodelife sun`.
+type sunReport struct {
+	Time                  string  `json:"time"`
+	LatDeg                float64 `json:"lat_deg"`
+	LonDeg                float64 `json:"lon_deg"`
+	ZenithDeg             float64 `json:"zenith_deg"`
+	ElevationDeg          float64 `json:"elevation_deg"`
+	AzimuthDeg            float64 `json:"azimuth_deg"`
+	DeclinationDeg        float64 `json:"declination_deg"`
+	EquationOfTimeMin     float64 `json:"equation_of_time_min"`
+	Sunrise               *string `json:"sunrise"`
+	Sunset                *string `json:"sunset"`
+	SolarNoon             *string `json:"solar_noon"`
+	Polar                 *string `json:"polar"`
+	DayLengthH            float64 `json:"day_length_h"`
+	ExtraterrestrialDaily float64 `json:"extraterrestrial_daily_wh_m2"`
+}
+
+func cmdSun(args []string, stdout io.Writer) error {
+	fs := newFlags("sun")
+	lat := fs.Float64("lat", math.NaN(), "latitude, degrees north")
+	lon := fs.Float64("lon", math.NaN(), "longitude, degrees east")
+	at := fs.String("time", "", "instant, RFC 3339 (e.g. 2027-06-21T12:00:00+02:00)")
+	asJSON := fs.Bool("json", false, "print JSON")
+	if err := parseFlags(fs, args); err != nil {
+		return err
+	}
+	if math.IsNaN(*lat) || math.IsNaN(*lon) || *at == "" {
+		return usageError{"sun: give --lat, --lon and --time"}
+	}
+	if err := sun.CheckSite(*lat, *lon); err != nil {
+		return usageError{err.Error()} // "sun: latitude … out of range …"
+	}
+	t, err := time.Parse(time.RFC3339, *at)
+	if err != nil {
+		return usageError{fmt.Sprintf("sun: --time %q is not an RFC 3339 instant (allowed: e.g. 2027-06-21T12:00:00+02:00 or …Z)", *at)}
+	}
+	pos := sun.At(t, *lat, *lon)
+	// The day is the calendar date of --time at its own UTC offset.
+	day, err := sun.Events(t, *lat, *lon, t.Location())
+	if err != nil {
+		return usageError{"sun: " + err.Error()}
+	}
+	rep := sunReport{Time: t.Format(time.RFC3339), LatDeg: *lat, LonDeg: *lon,
+		ZenithDeg: pos.ZenithDeg, ElevationDeg: pos.ElevationDeg, AzimuthDeg: pos.AzimuthDeg,
+		DeclinationDeg: pos.DeclinationDeg, EquationOfTimeMin: pos.EquationOfTimeMin,
+		DayLengthH:            day.DayLengthH,
+		ExtraterrestrialDaily: sky.DailyExtraterrestrialWhm2(day.SolarNoon, *lat, sky.SolarConstantWm2)}
+	utc := func(x time.Time) *string {
+		v := x.UTC().Format(time.RFC3339)
+		return &v
+	}
+	rep.SolarNoon = utc(day.SolarNoon)
+	if day.Polar != sun.NotPolar {
+		p := string(day.Polar)
+		rep.Polar = &p
+	} else {
+		rep.Sunrise, rep.Sunset = utc(day.Sunrise), utc(day.Sunset)
+	}
+	if *asJSON {
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(rep)
+	}
+	var b strings.Builder
+	fmt.Fprintf(&b, "Sun at %.4f°, %.4f° on %s\n", *lat, *lon, rep.Time)
+	fmt.Fprintf(&b, "  elevation      %8.3f° (refracted; geometric zenith %.3f°)\n", pos.ElevationDeg, pos.ZenithDeg)
+	fmt.Fprintf(&b, "  azimuth        %8.3f° from north, clockwise\n", pos.AzimuthDeg)
+	fmt.Fprintf(&b, "  declination    %8.3f°\n", pos.DeclinationDeg)
+	fmt.Fprintf(&b, "  equation of time %+.2f min\n", pos.EquationOfTimeMin)
+	local := func(x time.Time) string { return x.In(t.Location()).Format("15:04:05 Z07:00") }
+	if rep.Polar != nil {
+		fmt.Fprintf(&b, "  polar %s all day; solar noon %s\n", *rep.Polar, local(day.SolarNoon))
+	} else {
+		fmt.Fprintf(&b, "  sunrise %s, solar noon %s, sunset %s (%.2f h of daylight)\n",
+			local(day.Sunrise), local(day.SolarNoon), local(day.Sunset), day.DayLengthH)
+	}
+	fmt.Fprintf(&b, "  extraterrestrial irradiation on the horizontal that day: %.0f Wh/m²\n", rep.ExtraterrestrialDaily)
+	_, err = io.WriteString(stdout, b.String())
+	return err
 }

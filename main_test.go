@@ -5,8 +5,10 @@ import (
 	"encoding/json"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
+	"time"
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
@@ -36,7 +38,7 @@ func TestPlanJSONMatchesEngine(t *testing.T) {
 		require.Equal(t, 0, code, errOut)
 		var got, want any
 		require.NoError(t, json.Unmarshal([]byte(out), &got))
-		b, _ := json.Marshal(plan.Run(scenario.Demo()))
+		b, _ := json.Marshal(mustPlan(t, scenario.Demo()))
 		require.NoError(t, json.Unmarshal(b, &want))
 		assert.Equal(t, want, got)
 	}
@@ -50,7 +52,7 @@ func TestPlanSummary(t *testing.T) {
 	p := writeFile(t, "demo.json", scenario.DemoJSON())
 	code, out, _ := runCmd(t, "", "plan", p)
 	require.Equal(t, 0, code)
-	r := plan.Run(scenario.Demo())
+	r := mustPlan(t, scenario.Demo())
 	assert.Contains(t, out, "Lasts         "+r.Lifetime)
 	assert.Contains(t, out, *r.FirstBrownout)
 	assert.Contains(t, out, "First swap    "+r.Swaps[0].Date)
@@ -127,19 +129,120 @@ func TestREADMEDocumentsTheFormats(t *testing.T) {
 	require.NoError(t, err)
 	text := string(readme)
 	for _, f := range scenario.Fields() {
-		assert.Contains(t, text, "| `"+f.Path+"` |", "README lacks scenario field %s", f.Path)
+		assert.True(t, strings.Contains(text, "| `"+f.Path+"` |"), "README lacks scenario field %s", f.Path)
 	}
-	b, err := json.Marshal(plan.Run(scenario.Demo()))
+	b, err := json.Marshal(mustPlan(t, scenario.Demo()))
 	require.NoError(t, err)
 	var m map[string]any
 	require.NoError(t, json.Unmarshal(b, &m))
 	for k := range m {
-		assert.Contains(t, text, "`"+k+"`", "README lacks result key %s", k)
+		assert.True(t, strings.Contains(text, "`"+k+"`"), "README lacks result key %s", k)
 	}
 	for k := range m["energy_wh"].(map[string]any) {
-		assert.Contains(t, text, "`"+k+"`", "README lacks energy_wh key %s", k)
+		assert.True(t, strings.Contains(text, "`"+k+"`"), "README lacks energy_wh key %s", k)
 	}
-	for _, c := range []string{"outside-rated-temperature", "cold-capacity", "passivation", "lithium-primary", "rechargeable-without-harvest"} {
-		assert.Contains(t, text, "`"+c+"`")
+	for k := range m["daily"].([]any)[0].(map[string]any) {
+		assert.True(t, strings.Contains(text, "`"+k+"`"), "README lacks daily key %s", k)
 	}
+	// Every caution code the engine can raise is listed.
+	src, err := os.ReadFile("engine/plan/cautions.go")
+	require.NoError(t, err)
+	codes := regexp.MustCompile(`(?:add\(|Code: )"([a-z-]+)"`).FindAllStringSubmatch(string(src), -1)
+	require.NotEmpty(t, codes)
+	for _, c := range codes {
+		assert.True(t, strings.Contains(text, "`"+c[1]+"`"), "README lacks caution %s", c[1])
+	}
+}
+
+func mustPlan(t *testing.T, s scenario.Scenario) plan.Result {
+	t.Helper()
+	r, err := plan.Run(s)
+	require.NoError(t, err)
+	return r
+}
+
+func TestSunCommand(t *testing.T) {
+	// Reda & Andreas SPA example (NREL/TP-560-34302, Table A5.1), compared
+	// with the NOAA-equation values and tolerances of REFERENCE-VALUES §1a:
+	// geometric zenith 50.127926°, azimuth 194.342583°, EoT 14.64661 min,
+	// sunrise 06:12:43 local (13:12:43 UT) within 60 s.
+	code, out, errOut := runCmd(t, "", "sun", "--lat", "39.742476", "--lon", "-105.1786", "--time", "2003-10-17T12:30:30-07:00", "--json")
+	require.Equal(t, 0, code, errOut)
+	var r map[string]any
+	require.NoError(t, json.Unmarshal([]byte(out), &r))
+	assert.InDelta(t, 50.127926, r["zenith_deg"], 0.01)
+	assert.InDelta(t, 194.342583, r["azimuth_deg"], 0.01)
+	assert.InDelta(t, 14.64661, r["equation_of_time_min"], 0.02)
+	assert.InDelta(t, 39.891362, r["elevation_deg"], 0.02) // NOAA apparent elevation
+	rise, err := time.Parse(time.RFC3339, r["sunrise"].(string))
+	require.NoError(t, err)
+	assert.InDelta(t, 0, rise.Sub(time.Date(2003, 10, 17, 13, 12, 43, 0, time.UTC)).Seconds(), 60)
+	assert.Nil(t, r["polar"])
+	// Daily extraterrestrial irradiation, D&B eq. 1.10.3 at φ = 39.7425°,
+	// δ = −9.3158°, 1361 W/m² / R² with R = 0.99654 AU (REFERENCE-VALUES §1a)
+	// [CALC, separate Python session]: 6316 Wh/m²; the engine takes δ at solar
+	// noon rather than 12:30, hence the tolerance.
+	assert.InDelta(t, 6316, r["extraterrestrial_daily_wh_m2"], 15)
+
+	// Polar night in Svalbard at the December solstice: no rise, no set.
+	code, out, _ = runCmd(t, "", "sun", "--lat", "78.2", "--lon", "15.6", "--time", "2027-12-21T12:00:00+01:00", "--json")
+	require.Equal(t, 0, code)
+	require.NoError(t, json.Unmarshal([]byte(out), &r))
+	assert.Equal(t, "night", r["polar"])
+	assert.Nil(t, r["sunrise"])
+	assert.Nil(t, r["sunset"])
+	assert.Equal(t, 0.0, r["day_length_h"])
+	assert.Equal(t, 0.0, r["extraterrestrial_daily_wh_m2"])
+
+	code, out, _ = runCmd(t, "", "sun", "--lat", "39.74", "--lon", "-105.18", "--time", "2027-06-21T12:00:00-06:00")
+	assert.Equal(t, 0, code)
+	assert.Contains(t, out, "sunrise")
+
+	for _, args := range [][]string{
+		{"sun", "--lat", "91", "--lon", "0", "--time", "2027-01-01T00:00:00Z"},
+		{"sun", "--lat", "10", "--lon", "0", "--time", "yesterday"},
+		{"sun", "--lat", "10"},
+	} {
+		code, _, errOut := runCmd(t, "", args...)
+		assert.Equal(t, 2, code, "%v", args)
+		assert.NotEmpty(t, errOut)
+	}
+}
+
+func TestPlanWithWeatherFile(t *testing.T) {
+	dir := t.TempDir()
+	data, err := os.ReadFile("engine/weather/testdata/nsrdb-tmy3-724666-golden-co.csv")
+	require.NoError(t, err)
+	require.NoError(t, os.WriteFile(filepath.Join(dir, "golden.csv"), data, 0o644))
+	s := scenario.Demo()
+	s.Site.LatDeg, s.Site.LonDeg, s.Site.Timezone = 39.742, -105.179, "America/Denver"
+	s.Site.Placement, s.Site.WeatherFile = scenario.Outdoor, "golden.csv"
+	s.Harvest.Kind = scenario.HarvestPanel
+	s.Cells.Chemistry, s.Cells.Form = "li-ion", "18650"
+	p := filepath.Join(dir, "golden-node.json")
+	require.NoError(t, os.WriteFile(p, s.JSON(), 0o644))
+	code, out, errOut := runCmd(t, "", "plan", "--json", p)
+	require.Equal(t, 0, code, errOut)
+	var r plan.Result
+	require.NoError(t, json.Unmarshal([]byte(out), &r))
+	assert.Greater(t, r.EnergyWh.Harvested, 0.0)
+	// The file's coldest hour at Golden is far below freezing (TMY3 dry-bulb).
+	assert.Less(t, r.TempMinC, -10.0)
+	assert.NotContains(t, codesOf(r), "weather-file-far")
+
+	// A missing file is bad input, named at its JSON path.
+	s.Site.WeatherFile = "nowhere.epw"
+	require.NoError(t, os.WriteFile(p, s.JSON(), 0o644))
+	code, _, errOut = runCmd(t, "", "plan", p)
+	assert.Equal(t, 2, code)
+	assert.Contains(t, errOut, "site.weather_file")
+	assert.Contains(t, errOut, "nowhere.epw")
+}
+
+func codesOf(r plan.Result) []string {
+	var cs []string
+	for _, c := range r.Cautions {
+		cs = append(cs, c.Code)
+	}
+	return cs
 }

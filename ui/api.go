@@ -15,7 +15,11 @@ func Run(data []byte) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	return json.Marshal(plan.Run(s))
+	r, err := plan.Run(s)
+	if err != nil {
+		return nil, err
+	}
+	return json.Marshal(r)
 }
 
 // Load shows a scenario file and returns its result as JSON. A bad file
@@ -25,9 +29,12 @@ func (a *App) Load(data []byte) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	r := plan.Run(s) // outside the lock: the app keeps drawing meanwhile
 	a.mu.Lock()
 	defer a.mu.Unlock()
+	r, err := a.planner.Run(s)
+	if err != nil {
+		return nil, err
+	}
 	a.form.Rebuild(s)
 	a.setScenario(s, r)
 	return a.resJSON, nil

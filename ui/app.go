@@ -32,6 +32,7 @@ type App struct {
 	scen    scenario.Scenario
 	res     plan.Result
 	resJSON []byte
+	planner plan.Planner // reuses the site's table across node and cell edits
 	answer  Answer
 	form    *Form
 	page    Page
@@ -73,7 +74,11 @@ func New(o Options) (*App, error) {
 	}
 	a := &App{theme: o.Theme, fonts: fonts, onFirst: o.OnFirstFrame, w: 1280, h: 720, scale: 1}
 	a.form = NewForm(s)
-	a.setScenario(s, plan.Run(s))
+	r, err := a.planner.Run(s)
+	if err != nil {
+		return nil, err
+	}
+	a.setScenario(s, r)
 	return a, nil
 }
 
@@ -134,8 +139,12 @@ func (a *App) apply(e Edit) string {
 	if err != nil {
 		return reason(err, e.Path)
 	}
+	r, err := a.planner.Run(s)
+	if err != nil {
+		return reason(err, e.Path)
+	}
 	a.form.SetValues(s)
-	a.setScenario(s, plan.Run(s))
+	a.setScenario(s, r)
 	return ""
 }
 

@@ -62,7 +62,7 @@ func TestAppEditFrameRateByMouseAndKeys(t *testing.T) {
 		t.Errorf("scenario after the edit: fps %v, err %v; want 10", s.Node.Vision.FPS, err)
 	}
 	// The result shown is the engine's for the edited scenario.
-	want, _ := json.Marshal(plan.Run(s))
+	want, _ := json.Marshal(mustPlan(t, s))
 	if !bytes.Equal(a.ResultJSON(), want) {
 		t.Error("the app's result differs from plan.Run of its scenario")
 	}
@@ -129,7 +129,7 @@ func TestRunMatchesTheEngine(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	want, _ := json.Marshal(plan.Run(scenario.Demo()))
+	want, _ := json.Marshal(mustPlan(t, scenario.Demo()))
 	if !bytes.Equal(got, want) {
 		t.Error("Run(demo) differs from json.Marshal(plan.Run(demo))")
 	}
@@ -169,4 +169,13 @@ func TestLoadShowsTheScenario(t *testing.T) {
 	if !a.dirty {
 		t.Error("Load did not ask for a redraw")
 	}
+}
+
+func mustPlan(t *testing.T, s scenario.Scenario) plan.Result {
+	t.Helper()
+	r, err := plan.Run(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return r
 }

@@ -171,7 +171,7 @@ func TestPlaceLabels(t *testing.T) {
 
 func TestChartOfTheDemo(t *testing.T) {
 	s := scenario.Demo()
-	r := plan.Run(s)
+	r := mustPlan(t, s)
 	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, fonts(t), Light(), 1)
 	if len(v.Swaps) != len(r.Swaps) || len(v.Swaps) == 0 {
 		t.Fatalf("%d swap markers for %d swaps", len(v.Swaps), len(r.Swaps))
@@ -201,7 +201,7 @@ func TestChartSwapOnTheFlatDate(t *testing.T) {
 	// With no reserve the cells are swapped when flat: one label for both.
 	s := scenario.Demo()
 	s.Plan.ReservePct = 0
-	r := plan.Run(s)
+	r := mustPlan(t, s)
 	if len(r.Swaps) == 0 || r.FirstBrownout == nil || r.Swaps[0].Date != *r.FirstBrownout {
 		t.Fatalf("swaps %v, flat %v: the test needs a swap on the flat date", r.Swaps, r.FirstBrownout)
 	}

@@ -78,14 +78,16 @@ func valueText(s scenario.Scenario, path string) string {
 		panic("ui: unknown field " + path)
 	}
 	switch v := f.Get(&s).(type) {
-	case float64:
-		if path == "cells.capacity_mah" && v == 0 {
+	case nil: // an optional field not given
+		if path == "cells.capacity_mah" {
 			if c, ok := cell.Lookup(s.Cells.Chemistry); ok {
 				if form, ok := c.Form(s.Cells.Form); ok {
 					return FormatNumber(form.CapacityMAh)
 				}
 			}
 		}
+		return ""
+	case float64:
 		return FormatNumber(v)
 	case int:
 		return fmt.Sprint(v)

@@ -11,7 +11,9 @@ import (
 func BenchmarkRunDemo(b *testing.B) {
 	s := scenario.Demo()
 	for b.Loop() {
-		Run(s)
+		if _, err := Run(s); err != nil {
+			b.Fatal(err)
+		}
 	}
 }
 
@@ -22,6 +24,8 @@ func BenchmarkRunOutdoor5y(b *testing.B) {
 	s.Site.Placement = scenario.Outdoor
 	s.Plan.Years = 5
 	for b.Loop() {
-		Run(s)
+		if _, err := Run(s); err != nil {
+			b.Fatal(err)
+		}
 	}
 }

@@ -2,6 +2,7 @@ package plan
 
 import (
 	"fmt"
+	"math"
 
 	"nodelife/engine/scenario"
 	"nodelife/engine/sim"
@@ -24,6 +25,20 @@ func Cautions(s scenario.Scenario, r sim.Result) []Caution {
 			"At %.0f °C these cells deliver about %.0f %% of their 20 °C capacity; the plan accounts for it, but a colder spell than modelled shortens the life.",
 			r.TempMinC, f*100)
 	}
+	if chem.Primary && s.Harvest.Kind != scenario.HarvestNone {
+		add("primary-with-harvester",
+			"A %s harvester is fitted to primary %s cells, which must never be charged: the plan lets the harvest feed the node directly and never into the cells. Make sure the circuit cannot charge them (a blocking diode or a supply selector), or choose a rechargeable chemistry.",
+			s.Harvest.Kind, chem.Name)
+	}
+	if !chem.Primary && s.Harvest.Kind != scenario.HarvestNone && r.TempMinC < chem.ChargeMinC {
+		add("no-charge-when-cold",
+			"%s cells must not be charged below %.0f °C; the plan stops charging when the cells are colder, and the site reaches %.0f °C. Check the charger enforces it.",
+			chem.Name, chem.ChargeMinC, r.TempMinC)
+	}
+	if s.Harvest.Kind == scenario.HarvestPanel {
+		add("solar-installation",
+			"Mount panels and run cables to local electrical codes; work at height needs the usual precautions.")
+	}
 	if chem.ID == "li-socl2" {
 		add("passivation",
 			"Lithium thionyl chloride cells build a passivation layer in storage: the first pulses after a long shelf time can sag (voltage delay). Condition new cells or fit a buffer capacitor if the node wakes a radio.")
@@ -38,4 +53,27 @@ func Cautions(s scenario.Scenario, r sim.Result) []Caution {
 			chem.Name, chem.SelfDischargePerYear*100)
 	}
 	return cs
+}
+
+// inputCautions warn about the files a scenario names.
+func inputCautions(s scenario.Scenario, in Inputs) []Caution {
+	var cs []Caution
+	if w := in.Weather; w != nil {
+		if km := distanceKm(s.Site.LatDeg, s.Site.LonDeg, w.Site.LatDeg, w.Site.LonDeg); km > 50 {
+			cs = append(cs, Caution{Code: "weather-file-far",
+				Message: fmt.Sprintf("The weather file's station (%s, %.2f°, %.2f°) is %.0f km from the site; its weather may not be the site's.",
+					w.Site.Name, w.Site.LatDeg, w.Site.LonDeg, km)})
+		}
+	}
+	return cs
+}
+
+// distanceKm is the great-circle distance by the haversine formula on a
+// sphere of radius 6371 km (the mean Earth radius, IUGG).
+func distanceKm(lat1, lon1, lat2, lon2 float64) float64 {
+	const r = 6371.0
+	rad := math.Pi / 180
+	dLat, dLon := (lat2-lat1)*rad, (lon2-lon1)*rad
+	a := math.Sin(dLat/2)*math.Sin(dLat/2) + math.Cos(lat1*rad)*math.Cos(lat2*rad)*math.Sin(dLon/2)*math.Sin(dLon/2)
+	return 2 * r * math.Asin(math.Min(1, math.Sqrt(a)))
 }

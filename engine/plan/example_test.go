@@ -8,7 +8,10 @@ import (
 )
 
 func ExampleRun() {
-	r := plan.Run(scenario.Demo())
+	r, err := plan.Run(scenario.Demo())
+	if err != nil {
+		panic(err)
+	}
 	fmt.Println("lasts", r.Lifetime, "- cells flat on", *r.FirstBrownout)
 	fmt.Println("first swap", r.Swaps[0].Date, "at the reserve")
 	fmt.Printf("average load %.2f mW\n", r.AverageLoadMW)

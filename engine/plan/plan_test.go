@@ -37,7 +37,7 @@ func TestFormatSpan(t *testing.T) {
 
 func TestResultOfDemo(t *testing.T) {
 	s := scenario.Demo()
-	r := Run(s)
+	r := mustRun(t, s)
 	require.NotNil(t, r.LifetimeDays)
 	require.NotNil(t, r.FirstBrownout)
 	start, _ := time.Parse(time.DateOnly, r.Start)
@@ -80,7 +80,7 @@ func TestResultOfDemo(t *testing.T) {
 func TestOutlivingCellsGiveNull(t *testing.T) {
 	s := scenario.Demo()
 	s.Plan.Years = 2
-	b, err := json.Marshal(Run(s))
+	b, err := json.Marshal(mustRun(t, s))
 	require.NoError(t, err)
 	var m map[string]any
 	require.NoError(t, json.Unmarshal(b, &m))
@@ -94,15 +94,15 @@ func TestCautions(t *testing.T) {
 	s := scenario.Demo()
 	s.Site.Placement, s.Site.FixedTempC = scenario.Fixed, -30
 	s.Cells.Chemistry, s.Cells.Form = "alkaline", "D"
-	r := Run(s)
+	r := mustRun(t, s)
 	assert.Contains(t, codes(r), "outside-rated-temperature") // alkaline rated from −18 °C
 	assert.Contains(t, codes(r), "cold-capacity")
 	assert.NotContains(t, codes(r), "lithium-primary")
 
 	s = scenario.Demo()
 	s.Cells.Chemistry, s.Cells.Form = "li-ion", "18650"
-	assert.Contains(t, codes(Run(s)), "rechargeable-without-harvest")
-	assert.NotContains(t, codes(Run(s)), "outside-rated-temperature")
+	assert.Contains(t, codes(mustRun(t, s)), "rechargeable-without-harvest")
+	assert.NotContains(t, codes(mustRun(t, s)), "outside-rated-temperature")
 }
 
 func codes(r Result) []string {
@@ -111,4 +111,42 @@ func codes(r Result) []string {
 		cs = append(cs, c.Code)
 	}
 	return cs
+}
+
+func mustRun(t *testing.T, s scenario.Scenario) Result {
+	t.Helper()
+	r, err := Run(s)
+	require.NoError(t, err)
+	return r
+}
+
+func TestPlannerReusesTheSiteTable(t *testing.T) {
+	var p Planner
+	s := scenario.Demo()
+	s.Site.Placement = scenario.Outdoor
+	a, err := p.Run(s)
+	require.NoError(t, err)
+	y := p.year
+	s.Node.Vision.FPS = 8 // a node edit
+	b, err := p.Run(s)
+	require.NoError(t, err)
+	assert.Same(t, y, p.year, "a node edit keeps the table")
+	assert.Less(t, *b.LifetimeDays, *a.LifetimeDays)
+	want, err := Run(s)
+	require.NoError(t, err)
+	assert.Equal(t, want, b, "the cached table gives the same answer")
+	s.Site.OutdoorMeanC = -5 // a site edit
+	_, err = p.Run(s)
+	require.NoError(t, err)
+	assert.NotSame(t, y, p.year, "a site edit rebuilds the table")
+}
+
+func TestWeatherFileMustBeGiven(t *testing.T) {
+	s := scenario.Demo()
+	s.Site.WeatherFile = "golden.csv"
+	_, err := Run(s)
+	var fe *scenario.FieldError
+	require.ErrorAs(t, err, &fe)
+	assert.Equal(t, "site.weather_file", fe.Path)
+	assert.Equal(t, `site.weather_file: "golden.csv" is not loaded (allowed: a TMY3 (.csv) or EPW (.epw) file given with the scenario)`, err.Error())
 }

@@ -8,6 +8,7 @@ import (
 	"nodelife/engine/load"
 	"nodelife/engine/scenario"
 	"nodelife/engine/sim"
+	"nodelife/engine/weather"
 )
 
 // ResultFormat names the result's format and version.
@@ -64,6 +65,8 @@ type Day struct {
 	TempMinC   float64 `json:"temp_min_c"`
 	TempMeanC  float64 `json:"temp_mean_c"`
 	TempMaxC   float64 `json:"temp_max_c"`
+	HarvestWh  float64 `json:"harvest_wh"`
+	LoadWh     float64 `json:"load_wh"`
 }
 
 // Caution is a warning the user must see, with a stable code.
@@ -72,9 +75,24 @@ type Caution struct {
 	Message string `json:"message"`
 }
 
-// Run simulates the scenario and builds its result.
-func Run(s scenario.Scenario) Result {
-	return FromSim(s, sim.Run(s))
+// Inputs are the files a scenario names, read by the caller: the engine
+// never opens files itself, so the command line and the browser supply them.
+type Inputs struct {
+	// Weather is the file named by site.weather_file, or nil.
+	Weather *weather.Series
+}
+
+// Run simulates a scenario that names no files and builds its result. A
+// scenario that names a weather file gives an error at site.weather_file;
+// use RunWith.
+func Run(s scenario.Scenario) (Result, error) {
+	return RunWith(s, Inputs{})
+}
+
+// RunWith simulates the scenario with the files it names.
+func RunWith(s scenario.Scenario, in Inputs) (Result, error) {
+	p := Planner{Inputs: in}
+	return p.Run(s)
 }
 
 // FromSim builds the result of a finished simulation.
@@ -119,12 +137,14 @@ func FromSim(s scenario.Scenario, r sim.Result) Result {
 	for i, d := range r.Days {
 		out.Daily[i] = Day{Date: d.Date.Format(time.DateOnly),
 			SoCMinPct: round3(d.SoCMinPct), SoCMeanPct: round3(d.SoCMeanPct), SoCMaxPct: round3(d.SoCMaxPct),
-			TempMinC: round3(d.TempMinC), TempMeanC: round3(d.TempMeanC), TempMaxC: round3(d.TempMaxC)}
+			TempMinC: round3(d.TempMinC), TempMeanC: round3(d.TempMeanC), TempMaxC: round3(d.TempMaxC),
+			HarvestWh: round6(d.HarvestWh), LoadWh: round6(d.LoadWh)}
 	}
 	return out
 }
 
-func round3(x float64) float64 { return math.Round(x*1000) / 1000 }
+func round3(x float64) float64 { return math.Round(x*1e3) / 1e3 }
+func round6(x float64) float64 { return math.Round(x*1e6) / 1e6 }
 
 // FormatSpan writes the calendar time from a to b as "4 y 7 mo", "7 mo" or,
 // under a month, "12 d". Whole months are counted on the calendar; a part

@@ -10,12 +10,15 @@ import (
 type Kind int
 
 const (
-	Number  Kind = iota // a JSON number within [Min, Max]
-	Integer             // a whole JSON number within [Min, Max]
-	Text                // a JSON string of at most Max characters
-	Choice              // a JSON string from Enum
-	Date                // a JSON string "YYYY-MM-DD" within [MinDate, MaxDate]
-	Zone                // a JSON string naming an IANA time zone
+	Number     Kind = iota // a JSON number within [Min, Max]
+	Integer                // a whole JSON number within [Min, Max]
+	Text                   // a JSON string of at most Max characters
+	Choice                 // a JSON string from Enum
+	Date                   // a JSON string "YYYY-MM-DD" within [MinDate, MaxDate]
+	Zone                   // a JSON string naming an IANA time zone
+	Clock                  // a JSON string "HH:MM", 00:00 to 24:00
+	NumberList             // a JSON array of numbers, each within [Min, Max]
+	ChoiceList             // a JSON array of distinct strings from Enum
 )
 
 // Field describes one leaf of the scenario file.
@@ -29,12 +32,18 @@ type Field struct {
 	Min, Max float64
 	// Enum lists the allowed values of a Choice.
 	Enum []string
-	// Optional fields may be absent or null; they have no default value and
-	// their zero value means "not given".
+	// Len is the exact length of a NumberList, or 0 for any length up to
+	// MaxLen.
+	Len, MaxLen int
+	// Optional fields may be absent or null; they have no default value. A
+	// *float64 field is nil when not given; a float64 one is 0 (its Min is
+	// above 0).
 	Optional bool
-	// Default is the value an absent field takes: float64, int or string.
+	// Default is the value an absent field takes: float64, int, string,
+	// []float64 or []string.
 	Default any
-	// ref returns a pointer into s: *float64, *int or *string.
+	// ref returns a pointer into s: *float64, **float64, *int, *string,
+	// *[]float64 or *[]string.
 	ref func(s *Scenario) any
 }
 
@@ -72,6 +81,26 @@ func Fields() []Field {
 		{Path: "site.outdoor_daily_range_c", Kind: Number, Unit: "°C", Min: 0, Max: 30, Default: 8.0,
 			Doc: "typical daily maximum minus minimum temperature", ref: func(s *Scenario) any { return &s.Site.OutdoorDailyRangeC }},
 
+		{Path: "site.albedo", Kind: Number, Min: 0, Max: 1, Default: 0.2,
+			Doc: "ground reflectance (albedo) in front of a panel", ref: func(s *Scenario) any { return &s.Site.Albedo }},
+		{Path: "site.weather_file", Kind: Text, Max: 500, Default: "",
+			Doc: "a TMY3 (.csv) or EPW (.epw) typical-year file, relative to the scenario file; its hourly irradiance and temperature replace the monthly model",
+			ref: func(s *Scenario) any { return &s.Site.WeatherFile }},
+		{Path: "site.horizon_deg", Kind: NumberList, Unit: "°", Min: 0, Max: 90, MaxLen: 72, Default: []float64{},
+			Doc: "obstructions: elevation above the horizon at evenly spaced azimuths from north, clockwise", ref: func(s *Scenario) any { return &s.Site.HorizonDeg }},
+		{Path: "site.climate.clearness", Kind: NumberList, Min: 0.05, Max: 0.85, Len: 12, Default: repeat(0.45, 12),
+			Doc: "monthly mean daily clearness index (January first): the share of the sun's energy above the air that reaches the ground", ref: func(s *Scenario) any { return &s.Site.Climate.Clearness }},
+		{Path: "site.hours.open", Kind: Clock, Default: "07:00",
+			Doc: "opening time, local clock", ref: func(s *Scenario) any { return &s.Site.Hours.Open }},
+		{Path: "site.hours.close", Kind: Clock, Default: "21:00",
+			Doc: "closing time, local clock; before the opening time, the site closes after midnight", ref: func(s *Scenario) any { return &s.Site.Hours.Close }},
+		{Path: "site.hours.days", Kind: ChoiceList, Enum: Weekdays(), Default: []string{"mon", "tue", "wed", "thu", "fri", "sat"},
+			Doc: "the days the site opens", ref: func(s *Scenario) any { return &s.Site.Hours.Days }},
+		{Path: "site.lighting.open_lux", Kind: Number, Unit: "lx", Min: 0, Max: 100000, Default: 500.0,
+			Doc: "illuminance at the node while the site is open (indoor and fixed placements)", ref: func(s *Scenario) any { return &s.Site.Lighting.OpenLux }},
+		{Path: "site.lighting.closed_lux", Kind: Number, Unit: "lx", Min: 0, Max: 100000, Default: 0.0,
+			Doc: "illuminance at the node while the site is closed", ref: func(s *Scenario) any { return &s.Site.Lighting.ClosedLux }},
+
 		{Path: "node.sleep_uw", Kind: Number, Unit: "µW", Min: 0, Max: 1e6, Default: 50.0,
 			Doc: "constant always-on draw of the node", ref: func(s *Scenario) any { return &s.Node.SleepUW }},
 		{Path: "node.regulator_efficiency", Kind: Number, Min: 0.1, Max: 1, Default: 0.85,
@@ -96,8 +125,32 @@ func Fields() []Field {
 		{Path: "cells.capacity_mah", Kind: Number, Unit: "mAh", Min: 1, Max: 1e6, Optional: true,
 			Doc: "rated capacity of one cell; absent: the form factor's", ref: func(s *Scenario) any { return &s.Cells.CapacityMAh }},
 
-		{Path: "harvest.kind", Kind: Choice, Enum: []string{"none"}, Default: "none",
-			Doc: "energy harvester", ref: func(s *Scenario) any { return &s.Harvest.Kind }},
+		{Path: "harvest.kind", Kind: Choice, Enum: []string{HarvestNone, HarvestPanel, HarvestIndoor}, Default: HarvestNone,
+			Doc: "energy harvester: none, a solar panel outdoors, or an indoor-light cell", ref: func(s *Scenario) any { return &s.Harvest.Kind }},
+		{Path: "harvest.charger_efficiency", Kind: Number, Min: 0.1, Max: 1, Default: 0.8,
+			Doc: "efficiency of the charger (or MPPT) between the harvester and the cells", ref: func(s *Scenario) any { return &s.Harvest.ChargerEfficiency }},
+		{Path: "harvest.panel.area_cm2", Kind: Number, Unit: "cm²", Min: 1, Max: 100000, Default: 40.0,
+			Doc: "panel area", ref: func(s *Scenario) any { return &s.Harvest.Panel.AreaCm2 }},
+		{Path: "harvest.panel.efficiency", Kind: Number, Min: 0.01, Max: 0.5, Default: 0.17,
+			Doc: "panel efficiency at standard test conditions", ref: func(s *Scenario) any { return &s.Harvest.Panel.Efficiency }},
+		{Path: "harvest.panel.tilt_deg", Kind: Number, Unit: "°", Min: 0, Max: 90, Optional: true,
+			Doc: "tilt from horizontal; absent: the latitude", ref: func(s *Scenario) any { return &s.Harvest.Panel.TiltDeg }},
+		{Path: "harvest.panel.azimuth_deg", Kind: Number, Unit: "°", Min: 0, Max: 360, Optional: true,
+			Doc: "direction the panel faces, from north clockwise; absent: the equator", ref: func(s *Scenario) any { return &s.Harvest.Panel.AzimuthDeg }},
+		{Path: "harvest.panel.temp_coeff_pct_per_c", Kind: Number, Unit: "%/°C", Min: -1, Max: 0, Default: -0.4,
+			Doc: "change of panel power per °C of cell temperature above 25 °C", ref: func(s *Scenario) any { return &s.Harvest.Panel.TempCoeffPctPerC }},
+		{Path: "harvest.panel.noct_c", Kind: Number, Unit: "°C", Min: 20, Max: 70, Default: 45.0,
+			Doc: "nominal operating cell temperature (800 W/m², 20 °C air)", ref: func(s *Scenario) any { return &s.Harvest.Panel.NOCTC }},
+		{Path: "harvest.panel.soiling_pct", Kind: NumberList, Unit: "%", Min: 0, Max: 100, Len: 12, Default: repeat(2, 12),
+			Doc: "monthly loss to dust and dirt (January first)", ref: func(s *Scenario) any { return &s.Harvest.Panel.SoilingPct }},
+		{Path: "harvest.panel.snow_loss_pct", Kind: NumberList, Unit: "%", Min: 0, Max: 100, Len: 12, Default: repeat(0, 12),
+			Doc: "monthly loss to snow cover (January first); a weather file's snow depth adds to it", ref: func(s *Scenario) any { return &s.Harvest.Panel.SnowLossPct }},
+		{Path: "harvest.indoor.area_cm2", Kind: Number, Unit: "cm²", Min: 1, Max: 10000, Default: 20.0,
+			Doc: "indoor-light cell area", ref: func(s *Scenario) any { return &s.Harvest.Indoor.AreaCm2 }},
+		{Path: "harvest.indoor.efficiency", Kind: Number, Min: 0.005, Max: 0.5, Default: 0.05,
+			Doc: "cell efficiency under the site's indoor light", ref: func(s *Scenario) any { return &s.Harvest.Indoor.Efficiency }},
+		{Path: "harvest.indoor.lux_per_wm2", Kind: Number, Unit: "lm/W", Min: 50, Max: 700, Default: 300.0,
+			Doc: "luminous efficacy of the indoor light: lux per W/m²", ref: func(s *Scenario) any { return &s.Harvest.Indoor.LuxPerWm2 }},
 
 		{Path: "plan.start", Kind: Date, Default: "2027-01-01",
 			Doc: "first day of the plan, local to the site", ref: func(s *Scenario) any { return &s.Plan.Start }},
@@ -120,14 +173,27 @@ func FieldByPath(path string) (Field, bool) {
 	return Field{}, false
 }
 
-// Get returns the field's value in s: float64, int or string.
+// Get returns the field's value in s: float64, int, string, []float64,
+// []string, or nil for an optional field not given.
 func (f Field) Get(s *Scenario) any {
 	switch p := f.ref(s).(type) {
 	case *float64:
+		if f.Optional && *p == 0 {
+			return nil
+		}
 		return *p
+	case **float64:
+		if *p == nil {
+			return nil
+		}
+		return **p
 	case *int:
 		return *p
 	case *string:
+		return *p
+	case *[]float64:
+		return *p
+	case *[]string:
 		return *p
 	}
 	panic("scenario: field " + f.Path + " has no value")
@@ -144,7 +210,22 @@ func (f Field) setDefault(s *Scenario) {
 		*p = f.Default.(int)
 	case *string:
 		*p = f.Default.(string)
+	case *[]float64:
+		*p = append([]float64{}, f.Default.([]float64)...)
+	case *[]string:
+		*p = append([]string{}, f.Default.([]string)...)
 	}
+}
+
+// Weekdays are the identifiers of the days of the week, Monday first.
+func Weekdays() []string { return []string{"mon", "tue", "wed", "thu", "fri", "sat", "sun"} }
+
+func repeat(x float64, n int) []float64 {
+	out := make([]float64, n)
+	for i := range out {
+		out[i] = x
+	}
+	return out
 }
 
 // Name is the last element of the field's path.

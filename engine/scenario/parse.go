@@ -84,25 +84,63 @@ func (p *parser) leaf(f Field, v gjson.Result) {
 	}
 	switch f.Kind {
 	case Number, Integer:
-		if v.Type != gjson.Number {
-			p.fail(f.Path, v, "is not a number", rangeText(f), ErrType)
-			return
-		}
-		x := v.Num
-		if f.Kind == Integer && x != math.Trunc(x) {
-			p.fail(f.Path, v, "is not a whole number", rangeText(f), ErrType)
-			return
-		}
-		if x < f.Min || x > f.Max {
-			p.fail(f.Path, v, "is out of range", rangeText(f), ErrRange)
+		x, ok := p.number(f, f.Path, v)
+		if !ok {
 			return
 		}
 		switch ptr := f.ref(&p.s).(type) {
 		case *float64:
 			*ptr = x
+		case **float64:
+			*ptr = &x
 		case *int:
 			*ptr = int(x)
 		}
+	case NumberList:
+		if !v.IsArray() {
+			p.fail(f.Path, v, "is not a list of numbers", allowedText(f), ErrType)
+			return
+		}
+		items := v.Array()
+		if (f.Len > 0 && len(items) != f.Len) || (f.MaxLen > 0 && len(items) > f.MaxLen) {
+			p.fail(f.Path, v, fmt.Sprintf("has %d values", len(items)), allowedText(f), ErrRange)
+			return
+		}
+		xs := make([]float64, 0, len(items))
+		for i, item := range items {
+			x, ok := p.number(f, fmt.Sprintf("%s[%d]", f.Path, i), item)
+			if !ok {
+				return
+			}
+			xs = append(xs, x)
+		}
+		*f.ref(&p.s).(*[]float64) = xs
+	case ChoiceList:
+		if !v.IsArray() {
+			p.fail(f.Path, v, "is not a list", allowedText(f), ErrType)
+			return
+		}
+		seen := map[string]bool{}
+		out := []string{}
+		for i, item := range v.Array() {
+			path := fmt.Sprintf("%s[%d]", f.Path, i)
+			if item.Type != gjson.String {
+				p.fail(path, item, "is not a string", allowedText(f), ErrType)
+				return
+			}
+			str := item.String()
+			if checkString(Field{Kind: Choice, Enum: f.Enum}, str) != "" {
+				p.fail(path, item, "is not one of the choices", allowedText(f), ErrRange)
+				return
+			}
+			if seen[str] {
+				p.fail(path, item, "appears twice", allowedText(f), ErrRange)
+				return
+			}
+			seen[str] = true
+			out = append(out, str)
+		}
+		*f.ref(&p.s).(*[]string) = out
 	default:
 		if v.Type != gjson.String {
 			p.fail(f.Path, v, "is not a string", allowedText(f), ErrType)
@@ -115,6 +153,24 @@ func (p *parser) leaf(f Field, v gjson.Result) {
 		}
 		*f.ref(&p.s).(*string) = str
 	}
+}
+
+// number reads one number of field f at path, reporting what is wrong.
+func (p *parser) number(f Field, path string, v gjson.Result) (float64, bool) {
+	if v.Type != gjson.Number {
+		p.fail(path, v, "is not a number", rangeText(f), ErrType)
+		return 0, false
+	}
+	x := v.Num
+	if f.Kind == Integer && x != math.Trunc(x) {
+		p.fail(path, v, "is not a whole number", rangeText(f), ErrType)
+		return 0, false
+	}
+	if x < f.Min || x > f.Max {
+		p.fail(path, v, "is out of range", rangeText(f), ErrRange)
+		return 0, false
+	}
+	return x, true
 }
 
 // checkString returns what is wrong with str as a value of f, or "".
@@ -138,6 +194,10 @@ func checkString(f Field, str string) string {
 		}
 		if d.Format(time.DateOnly) < MinDate || d.Format(time.DateOnly) > MaxDate {
 			return "is out of range"
+		}
+	case Clock:
+		if _, ok := ClockMinutes(str); !ok {
+			return "is not a time of day"
 		}
 	case Zone:
 		// "" and "Local" are names the Go library accepts but that are not IANA zones.
@@ -270,8 +330,36 @@ func allowedText(f Field) string {
 		return "a date YYYY-MM-DD from " + MinDate + " to " + MaxDate
 	case Zone:
 		return `an IANA time zone name such as "Europe/Oslo" or "America/Denver"`
+	case Clock:
+		return `a time "HH:MM" from "00:00" to "24:00"`
+	case NumberList:
+		n := fmt.Sprintf("up to %d", f.MaxLen)
+		if f.Len > 0 {
+			n = fmt.Sprint(f.Len)
+		}
+		s := fmt.Sprintf("a list of %s numbers, each from %s to %s", n, fmtNum(f.Min), fmtNum(f.Max))
+		if f.Unit != "" {
+			s += " " + f.Unit
+		}
+		return s
+	case ChoiceList:
+		return "a list of distinct values from " + allowedText(Field{Kind: Choice, Enum: f.Enum})
 	}
 	return rangeText(f)
+}
+
+// ClockMinutes reads "HH:MM" (00:00 to 24:00) as minutes after midnight.
+func ClockMinutes(s string) (int, bool) {
+	if len(s) != 5 || s[2] != ':' {
+		return 0, false
+	}
+	h, err1 := strconv.Atoi(s[:2])
+	m, err2 := strconv.Atoi(s[3:])
+	if err1 != nil || err2 != nil || h < 0 || h > 24 || m < 0 || m > 59 || (h == 24 && m != 0) ||
+		s[0] == '+' || s[0] == '-' || s[3] == '+' || s[3] == '-' {
+		return 0, false
+	}
+	return h*60 + m, true
 }
 
 func fmtNum(x float64) string { return strconv.FormatFloat(x, 'f', -1, 64) }

@@ -41,6 +41,33 @@ type Site struct {
 	OutdoorMeanC        float64
 	OutdoorAnnualRangeC float64
 	OutdoorDailyRangeC  float64
+	// Albedo is the ground's reflectance in front of a panel.
+	Albedo float64
+	// WeatherFile names a TMY3 (.csv) or EPW (.epw) typical-year file whose
+	// hourly irradiance and temperature replace the monthly model; "" for none.
+	WeatherFile string
+	// HorizonDeg is the obstruction elevation above the horizon at evenly
+	// spaced azimuths from north, clockwise; empty for an open horizon.
+	HorizonDeg []float64
+	Climate    Climate
+	Hours      Hours
+	Lighting   Lighting
+}
+
+// Climate is the site's monthly normals, January first.
+type Climate struct {
+	Clearness []float64 // monthly mean daily clearness index K̄T
+}
+
+// Hours are when the site is open, on its local clock.
+type Hours struct {
+	Open, Close string   // "HH:MM"; Close before Open runs past midnight
+	Days        []string // "mon" … "sun": the days it opens
+}
+
+// Lighting is the illuminance at the node from the site's lights.
+type Lighting struct {
+	OpenLux, ClosedLux float64
 }
 
 // Node is the sensor node's own consumption.
@@ -74,9 +101,67 @@ type Cells struct {
 	CapacityMAh float64
 }
 
-// Harvest is the energy harvester. Only "none" exists in this version.
+// Harvesters.
+const (
+	HarvestNone   = "none"
+	HarvestPanel  = "panel"  // a small solar panel outdoors
+	HarvestIndoor = "indoor" // an indoor-light cell under the site's lights
+)
+
+// Harvest is the energy harvester.
 type Harvest struct {
-	Kind string
+	Kind              string
+	ChargerEfficiency float64 // charger or MPPT efficiency into the cells
+	Panel             Panel
+	Indoor            IndoorCell
+}
+
+// Panel is a small solar panel.
+type Panel struct {
+	AreaCm2    float64
+	Efficiency float64 // at standard test conditions
+	// TiltDeg from horizontal; nil: the site's latitude (|lat|).
+	TiltDeg *float64
+	// AzimuthDeg from north, clockwise; nil: facing the equator.
+	AzimuthDeg       *float64
+	TempCoeffPctPerC float64 // power temperature coefficient, %/°C
+	NOCTC            float64 // nominal operating cell temperature, °C
+	SoilingPct       []float64
+	SnowLossPct      []float64
+}
+
+// IndoorCell is a photovoltaic cell made for indoor light.
+type IndoorCell struct {
+	AreaCm2    float64
+	Efficiency float64 // under the site's indoor light
+	LuxPerWm2  float64 // luminous efficacy of the light source, lm/W
+}
+
+// PanelTiltDeg returns the panel's tilt: as given, or the latitude.
+func (s Scenario) PanelTiltDeg() float64 {
+	if t := s.Harvest.Panel.TiltDeg; t != nil {
+		return *t
+	}
+	return min(abs(s.Site.LatDeg), 90)
+}
+
+// PanelAzimuthDeg returns the panel's azimuth: as given, or facing the
+// equator (180° north of it, 0° south of it).
+func (s Scenario) PanelAzimuthDeg() float64 {
+	if a := s.Harvest.Panel.AzimuthDeg; a != nil {
+		return *a
+	}
+	if s.Site.LatDeg < 0 {
+		return 0
+	}
+	return 180
+}
+
+func abs(x float64) float64 {
+	if x < 0 {
+		return -x
+	}
+	return x
 }
 
 // Plan is the planning horizon.

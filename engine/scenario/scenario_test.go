@@ -24,6 +24,29 @@ func doc(path, raw string) []byte {
 	return []byte(out)
 }
 
+// TestFieldsGroupObjects: the writer emits fields in table order, so each
+// object's fields must stand together in the table.
+func TestFieldsGroupObjects(t *testing.T) {
+	closed := map[string]bool{}
+	open := []string{}
+	for _, f := range Fields() {
+		parts := strings.Split(f.Path, ".")
+		dirs := parts[:len(parts)-1]
+		common := 0
+		for common < len(open) && common < len(dirs) && open[common] == dirs[common] {
+			common++
+		}
+		for len(open) > common {
+			closed[strings.Join(open, ".")] = true
+			open = open[:len(open)-1]
+		}
+		for _, d := range dirs[common:] {
+			open = append(open, d)
+			assert.False(t, closed[strings.Join(open, ".")], "%s reopens object %s", f.Path, strings.Join(open, "."))
+		}
+	}
+}
+
 func TestDemoParses(t *testing.T) {
 	s := Demo()
 	assert.Equal(t, Format, s.Format)
@@ -163,7 +186,8 @@ func TestSchemaAgreesWithParser(t *testing.T) {
 	fields := map[string]Field{}
 	for _, f := range Fields() {
 		fields[f.Path] = f
-		assert.Contains(t, leaves, f.Path, "field missing from the schema")
+		_, ok := leaves[f.Path]
+		assert.True(t, ok, "field %s missing from the schema", f.Path)
 	}
 	for path, prop := range leaves {
 		f, ok := fields[path]
@@ -173,7 +197,7 @@ func TestSchemaAgreesWithParser(t *testing.T) {
 		accept := func(raw string) {
 			s, err := Parse(withChemistryFor(path, raw))
 			if assert.NoError(t, err, "%s = %s", path, raw) && prop["default"] != nil && raw == mustJSON(prop["default"]) {
-				assert.EqualValues(t, prop["default"], f.Get(&s), "%s default", path)
+				assert.JSONEq(t, mustJSON(prop["default"]), mustJSON(f.Get(&s)), "%s default", path)
 			}
 		}
 		reject := func(raw string, sentinel error) {
@@ -181,14 +205,15 @@ func TestSchemaAgreesWithParser(t *testing.T) {
 			assert.ErrorIs(t, err, sentinel, "%s = %s", path, raw)
 			var fe *FieldError
 			if assert.True(t, errors.As(err, &fe), "%s = %s", path, raw) {
-				assert.Equal(t, path, fe.Path)
+				// The path of the field, or of the element of a list.
+				assert.True(t, fe.Path == path || strings.HasPrefix(fe.Path, path+"["), "%s: error at %s", path, fe.Path)
 			}
 		}
 		if d, ok := prop["default"]; ok {
 			accept(mustJSON(d))
 			// Absent means the default.
 			def := Default()
-			assert.EqualValues(t, d, f.Get(&def), "%s: Default() vs schema default", path)
+			assert.JSONEq(t, mustJSON(d), mustJSON(f.Get(&def)), "%s: Default() vs schema default", path)
 		} else {
 			assert.True(t, f.Optional, "%s has no default but is not optional", path)
 			accept("null")
@@ -200,6 +225,8 @@ func TestSchemaAgreesWithParser(t *testing.T) {
 			switch typ {
 			case "number", "integer":
 				checkNumber(t, prop, typ, accept, reject)
+			case "array":
+				checkArray(t, prop, accept, reject)
 			case "string":
 				reject("12", ErrType)
 				if enum, ok := prop["enum"].([]any); ok {
@@ -211,6 +238,14 @@ func TestSchemaAgreesWithParser(t *testing.T) {
 				if n, ok := prop["maxLength"].(float64); ok {
 					accept(mustJSON(strings.Repeat("é", int(n))))
 					reject(mustJSON(strings.Repeat("é", int(n)+1)), ErrRange)
+				}
+				if prop["pattern"] != nil { // the clock pattern
+					for _, ok := range []string{`"00:00"`, `"07:30"`, `"23:59"`, `"24:00"`} {
+						accept(ok)
+					}
+					for _, bad := range []string{`"24:01"`, `"7:30"`, `"07:60"`, `"noon"`, `"-1:00"`} {
+						reject(bad, ErrRange)
+					}
 				}
 				if prop["format"] == "date" {
 					accept(mustJSON(prop["formatMinimum"]))
@@ -239,6 +274,52 @@ func checkNumber(t *testing.T, prop map[string]any, typ string, accept func(stri
 	}
 	reject(mustJSON(lo-step), ErrRange)
 	reject(mustJSON(hi+step), ErrRange)
+}
+
+func checkArray(t *testing.T, prop map[string]any, accept func(string), reject func(string, error)) {
+	items := prop["items"].(map[string]any)
+	reject(`"1"`, ErrType)
+	if enum, ok := items["enum"].([]any); ok {
+		accept("[]")
+		accept(mustJSON(enum))
+		reject(mustJSON([]any{enum[0], enum[0]}), ErrRange) // uniqueItems
+		reject(`["someday"]`, ErrRange)
+		reject(`[1]`, ErrType)
+		return
+	}
+	lo, hi := items["minimum"].(float64), items["maximum"].(float64)
+	n := 3
+	if m, ok := prop["minItems"].(float64); ok {
+		n = int(m)
+		reject(mustJSON(make([]float64, n-1)), ErrRange)
+		reject(mustJSON(make([]float64, n+1)), ErrRange)
+	} else {
+		max := int(prop["maxItems"].(float64))
+		accept("[]")
+		accept(mustJSON(fill(max, lo)))
+		reject(mustJSON(fill(max+1, lo)), ErrRange)
+	}
+	accept(mustJSON(fill(n, lo)))
+	accept(mustJSON(fill(n, hi)))
+	bad := fill(n, lo)
+	bad[n-1] = hi + 1
+	reject(mustJSON(bad), ErrRange)
+	bad[n-1] = lo - 1
+	reject(mustJSON(bad), ErrRange)
+	wrong := make([]any, n)
+	for i := range wrong {
+		wrong[i] = lo
+	}
+	wrong[0] = "x"
+	reject(mustJSON(wrong), ErrType)
+}
+
+func fill(n int, x float64) []float64 {
+	out := make([]float64, n)
+	for i := range out {
+		out[i] = x
+	}
+	return out
 }
 
 // withChemistryFor sets path to raw; for cells.form and cells.chemistry it

@@ -84,6 +84,19 @@ func fieldSchema(f Field) map[string]any {
 	case Zone:
 		m["type"] = "string"
 		m["description"] = f.Doc + " (an IANA time zone name)"
+	case Clock:
+		m["type"], m["pattern"] = "string", `^(([01][0-9]|2[0-3]):[0-5][0-9]|24:00)$`
+	case NumberList:
+		m["type"] = "array"
+		m["items"] = map[string]any{"type": "number", "minimum": f.Min, "maximum": f.Max}
+		if f.Len > 0 {
+			m["minItems"], m["maxItems"] = f.Len, f.Len
+		} else {
+			m["maxItems"] = f.MaxLen
+		}
+	case ChoiceList:
+		m["type"], m["uniqueItems"] = "array", true
+		m["items"] = map[string]any{"type": "string", "enum": f.Enum}
 	}
 	if !f.Optional {
 		m["default"] = f.Default

@@ -23,8 +23,8 @@ func (s Scenario) JSON() []byte {
 	}
 	for _, f := range Fields() {
 		v := f.Get(&s)
-		if f.Optional && v == 0.0 {
-			continue
+		if v == nil {
+			continue // an optional field not given
 		}
 		parts := strings.Split(f.Path, ".")
 		dirs, name := parts[:len(parts)-1], parts[len(parts)-1]
@@ -55,6 +55,18 @@ func (s Scenario) JSON() []byte {
 		case string:
 			q, _ := json.Marshal(x)
 			b.Write(q)
+		case []float64:
+			b.WriteString("[")
+			for i, y := range x {
+				if i > 0 {
+					b.WriteString(", ")
+				}
+				b.WriteString(strconv.FormatFloat(y, 'g', -1, 64))
+			}
+			b.WriteString("]")
+		case []string:
+			q, _ := json.Marshal(x)
+			b.Write(bytes.ReplaceAll(q, []byte(`","`), []byte(`", "`)))
 		}
 	}
 	for len(open) > 0 {

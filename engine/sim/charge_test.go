@@ -12,7 +12,7 @@ import (
 // withDayHarvest returns the scenario's Year with a harvest of dayW from 06:00
 // to 18:00 UTC every day and none at night.
 func withDayHarvest(s scenario.Scenario, dayW float64) *Year {
-	y := NewYear(s)
+	y := mustYear(s)
 	y.HarvestW = make([]float64, len(y.TempC))
 	for i := range y.HarvestW {
 		if m := (i % y.PerDay) * y.ResMin; m >= 360 && m < 1080 {
@@ -83,7 +83,7 @@ func TestFullCellsTakeNoMore(t *testing.T) {
 	s.Node.Vision.FPS, s.Node.Events.PerHour, s.Node.SleepUW = 0, 0, 0
 	// With no load, a harvest of 100 W can only make up self-discharge: full
 	// cells take nothing more.
-	y := NewYear(s)
+	y := mustYear(s)
 	y.HarvestW = make([]float64, len(y.TempC))
 	for i := range y.HarvestW {
 		y.HarvestW[i] = 100

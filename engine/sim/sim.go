@@ -5,6 +5,7 @@ import (
 	"time"
 
 	"nodelife/engine/cell"
+	"nodelife/engine/harvest"
 	"nodelife/engine/load"
 	"nodelife/engine/scenario"
 )
@@ -50,6 +51,7 @@ type Day struct {
 	Date                             time.Time // local midnight
 	SoCMinPct, SoCMeanPct, SoCMaxPct float64
 	TempMinC, TempMeanC, TempMaxC    float64
+	HarvestWh, LoadWh                float64 // delivered by the harvester; drawn by the node
 }
 
 // Result is one run over the horizon.
@@ -87,9 +89,14 @@ func PackFor(s scenario.Scenario) cell.Pack {
 	return cell.Pack{Chem: chem, Series: s.Cells.Series, Parallel: s.Cells.Parallel, CellCapacityMAh: capMAh}
 }
 
-// Run simulates the scenario over its horizon.
+// Run simulates a scenario that names no weather file over its horizon. It
+// panics on one that does; use NewYear and RunWith for those.
 func Run(s scenario.Scenario) Result {
-	return RunWith(s, NewYear(s))
+	y, err := NewYear(s, nil)
+	if err != nil {
+		panic("sim: " + err.Error())
+	}
+	return RunWith(s, y)
 }
 
 // RunWith simulates the scenario with a prepared environment table, which
@@ -106,12 +113,22 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	loadTotalW := loadW.Total()
 	reserve := s.Plan.ReservePct / 100
 	chg := newCharger(pack)
+	// An indoor-light cell sees the site's lights (or daylight outdoors).
+	var indoorCell *harvest.IndoorCell
+	if s.Harvest.Kind == scenario.HarvestIndoor {
+		c := s.Harvest.Indoor
+		indoorCell = &harvest.IndoorCell{AreaM2: c.AreaCm2 * 1e-4, Efficiency: c.Efficiency,
+			LuxPerWm2: c.LuxPerWm2, ChargerEfficiency: s.Harvest.ChargerEfficiency}
+	}
+	outdoor := s.Site.Placement == scenario.Outdoor
+	open := newOpenHours(s.Site.Hours)
+	loc := s.Location()
 	r := Result{Start: start, End: end, Step: step, Pack: pack, LoadW: loadW,
 		MinSoCPct: 100, TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
 	r.Ledger.InstalledWh = ratedWh
 	planned, first := ratedWh, ratedWh // stored energy, Wh
 	firstFlat := false
-	var hours float64 // horizon length, h
+	var horizonH float64 // horizon length, h
 
 	// Temperature-dependent values, recomputed only when the temperature moves.
 	thermal := cell.NewThermal(chem)
@@ -131,7 +148,9 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 		if end.Before(limit) {
 			limit = end
 		}
-		into := t.Sub(day) // the first step's offset into the day
+		into := t.Sub(day)                       // the first step's offset into the day
+		regular := next.Sub(day) == 24*time.Hour // no clock change today
+		weekday := day.Weekday()
 		steps := int((limit.Sub(t) + step - 1) / step)
 		d := Day{Date: day, SoCMinPct: math.Inf(1), SoCMaxPct: math.Inf(-1),
 			TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
@@ -160,16 +179,34 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			}
 			loadWh := loadTotalW * dtH
 			sdWh := sdW * dtH
-			hours += dtH
+			horizonH += dtH
 			r.Ledger.SelfDischargeWh += sdWh
 
 			// Harvest feeds the load first; only the surplus reaches the cells.
 			var harvestWh, surplusWh float64
-			if y.HarvestW != nil {
+			switch {
+			case y.HarvestW != nil:
 				harvestWh = y.HarvestW[idx] * dtH
+			case indoorCell != nil:
+				var lux float64
+				if outdoor {
+					lux = y.LuxOutdoor[idx]
+				} else {
+					minute := int(at / time.Minute)
+					if !regular {
+						h, m, _ := day.Add(at).In(loc).Clock()
+						minute = h*60 + m
+					}
+					lux = open.lux(s.Site.Lighting, weekday, minute)
+				}
+				harvestWh = indoorCell.OutputW(lux) * dtH
+			}
+			if harvestWh > 0 {
 				r.Ledger.HarvestedWh += harvestWh
 				surplusWh = max(harvestWh-loadWh, 0)
 			}
+			d.HarvestWh += harvestWh
+			d.LoadWh += loadWh
 			need := loadWh - (harvestWh - surplusWh) + sdWh
 
 			// The planned cells: swapped when flat within the step.
@@ -228,7 +265,7 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 		day = next
 	}
 	for k := range loadW {
-		r.Ledger.LoadWh[k] = loadW[k] * hours
+		r.Ledger.LoadWh[k] = loadW[k] * horizonH
 	}
 	r.Ledger.RemainingWh = planned
 	return r

@@ -81,14 +81,26 @@ func TestLedgerBalances(t *testing.T) {
 	liion.Plan.ReservePct = 20
 	cold := fixedScenario("alkaline", "D", -30)
 	cold.Plan.Years = 2
+	panel := panelScenario(59.9, 10.75, "Europe/Oslo") // li-ion, freezing winters: charging stops
+	panel.Site.OutdoorMeanC, panel.Site.OutdoorAnnualRangeC = 6, 22
+	panel.Harvest.Panel.AreaCm2 = 10
+	primaryPanel := panel
+	primaryPanel.Cells.Chemistry, primaryPanel.Cells.Form = "li-socl2", "AA"
+	indoor := scenario.Demo()
+	indoor.Harvest.Kind = scenario.HarvestIndoor
+	indoor.Cells.Chemistry, indoor.Cells.Form = "li-ion", "18650"
 	for name, s := range map[string]scenario.Scenario{
 		"demo": scenario.Demo(), "outdoor north": outdoorNorth, "outdoor south": outdoorSouth,
 		"flat swaps": flatSwaps, "7-minute step": oddStep, "hourly": hourly, "li-ion": liion, "cold": cold,
+		"panel": panel, "primary with panel": primaryPanel, "indoor cell": indoor,
 	} {
 		r := Run(s)
 		assert.InDeltaf(t, 0, r.Ledger.Imbalance(), 1e-9, "%s: ledger %+v", name, r.Ledger)
 		assert.Greater(t, r.Ledger.LoadWh.Total(), 0.0, name)
 		assert.Equal(t, float64(len(r.Swaps)+1)*r.Pack.EnergyWh(), r.Ledger.InstalledWh, name)
+		if s.Harvest.Kind != scenario.HarvestNone {
+			assert.Greater(t, r.Ledger.HarvestedWh, 0.0, name)
+		}
 	}
 }
 

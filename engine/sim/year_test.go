@@ -12,7 +12,7 @@ import (
 func TestYearLayout(t *testing.T) {
 	s := scenario.Demo()
 	s.Plan.StepMin = 10
-	y := NewYear(s)
+	y := mustYear(s)
 	assert.Equal(t, 10, y.ResMin)
 	assert.Len(t, y.TempC, 366*144)
 	at := func(v string) int {
@@ -38,7 +38,7 @@ func TestYearOutdoorUsesSolarTime(t *testing.T) {
 	s.Site.Placement = scenario.Outdoor
 	s.Site.OutdoorMeanC, s.Site.OutdoorAnnualRangeC, s.Site.OutdoorDailyRangeC = 0, 0, 10
 	s.Site.LonDeg = 90 // solar time is UTC + 6 h
-	y := NewYear(s)
+	y := mustYear(s)
 	// The daily maximum is at 15:00 solar time = 09:00 UTC; the slot from
 	// 08:55 to 09:05 is not on the grid, so look at 09:00–09:10 (midpoint 09:05).
 	hot := y.TempC[row(6, 1)*y.PerDay+9*6]
@@ -49,7 +49,7 @@ func TestYearOutdoorUsesSolarTime(t *testing.T) {
 
 func TestRunWithSharedYear(t *testing.T) {
 	s := scenario.Demo()
-	y := NewYear(s)
+	y := mustYear(s)
 	a := RunWith(s, y)
 	s.Node.Vision.FPS = 10 // a node edit leaves the site's table valid
 	b := RunWith(s, y)
@@ -57,10 +57,52 @@ func TestRunWithSharedYear(t *testing.T) {
 	assert.True(t, b.Flat.Before(a.Flat))
 }
 
+// BenchmarkNewYearOutdoor: a year of outdoor temperatures at 10-minute slots.
 func BenchmarkNewYearOutdoor(b *testing.B) {
 	s := scenario.Demo()
 	s.Site.Placement = scenario.Outdoor
 	for b.Loop() {
-		NewYear(s)
+		mustYear(s)
+	}
+}
+
+// BenchmarkNewYearPanel: a year of sun positions, irradiance and panel
+// output at 10-minute slots (52 704 slots).
+func BenchmarkNewYearPanel(b *testing.B) {
+	s := panelScenario(59.9, 10.75, "Europe/Oslo")
+	for b.Loop() {
+		mustYear(s)
+	}
+}
+
+// BenchmarkRunPanel5y: 5 years at 10-minute steps with a panel, the site's
+// table already built (an edit of the node or the cells).
+func BenchmarkRunPanel5y(b *testing.B) {
+	s := panelScenario(59.9, 10.75, "Europe/Oslo")
+	y := mustYear(s)
+	for b.Loop() {
+		RunWith(s, y)
+	}
+}
+
+func mustYear(s scenario.Scenario) *Year {
+	y, err := NewYear(s, nil)
+	if err != nil {
+		panic(err)
+	}
+	return y
+}
+
+func TestSolarMonth(t *testing.T) {
+	cases := []struct {
+		row     int
+		minutes float64
+		want    time.Month
+	}{
+		{0, 0, time.January}, {0, -1, time.December}, {30, 1439, time.January}, {30, 1440, time.February},
+		{59, 0, time.February}, {60, 0, time.March}, {365, 1440, time.January}, {365, 0, time.December},
+	}
+	for _, c := range cases {
+		assert.Equal(t, c.want, solarMonth(c.row, c.minutes), "row %d %+g min", c.row, c.minutes)
 	}
 }
