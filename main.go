@@ -275,7 +275,7 @@ func cmdCells(args []string, stdout io.Writer) error {
 			kind = "primary, never charge"
 		}
 		fmt.Fprintf(&b, "%s: %s (%s)\n", c.ID, c.Name, kind)
-		fmt.Fprintf(&b, "  %.2g V nominal, %.2g V mean, %.2g V cut-off; self-discharge %.3g %%/yr at 20 °C; rated %.0f to %.0f °C\n",
+		fmt.Fprintf(&b, "  %.3g V nominal, %.3g V mean, %.3g V cut-off; self-discharge %.3g %%/yr at 20 °C; rated %.0f to %.0f °C\n",
 			c.NominalV, c.MeanDischargeV, c.CutoffV, c.SelfDischargePerYear*100, c.OperatingMinC, c.OperatingMaxC)
 		var forms []string
 		for _, f := range c.Forms {

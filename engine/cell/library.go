@@ -15,6 +15,19 @@ type Source struct {
 type Form struct {
 	Name        string  `json:"name"`         // common designation: "AA", "D", "18650" …
 	CapacityMAh float64 `json:"capacity_mah"` // rated capacity of one cell at low drain, 20 °C
+	// ResistanceMOhm is the cell's DC internal resistance at 20 °C and half
+	// charge, mΩ: what a current pulse drops across the cell.
+	ResistanceMOhm float64 `json:"resistance_mohm"`
+	// MaxContinuousMA and MaxPulseMA are the largest continuous and pulse
+	// (about a second) currents the maker rates the cell for.
+	MaxContinuousMA float64 `json:"max_continuous_ma"`
+	MaxPulseMA      float64 `json:"max_pulse_ma"`
+}
+
+// SoCPoint is one row of an open-circuit voltage curve.
+type SoCPoint struct {
+	SoC float64 `json:"soc"` // state of charge, 0 (empty at the cut-off) to 1 (full)
+	V   float64 `json:"v"`   // open-circuit voltage of one cell
 }
 
 // TempPoint is one row of a usable-capacity table.
@@ -54,8 +67,24 @@ type Chemistry struct {
 	ChargeEfficiency float64 `json:"charge_efficiency"`
 	// CapacityVsTemp is usable capacity against temperature, sorted by TempC.
 	CapacityVsTemp []TempPoint `json:"capacity_vs_temp"`
-	Forms          []Form      `json:"forms"`
-	Sources        []Source    `json:"sources"`
+	// OCV is the open-circuit voltage of one cell against state of charge at
+	// 20 °C, sorted by SoC, from 0 to 1.
+	OCV []SoCPoint `json:"ocv"`
+	// ResistanceVsTemp multiplies the forms' 20 °C internal resistance at
+	// other temperatures (1 at 20 °C; cold raises it), sorted by TempC.
+	ResistanceVsTemp []TempPoint `json:"resistance_vs_temp"`
+	// For rechargeable cells: capacity lost to ageing. CalendarFadePerYear is
+	// the fraction of capacity lost per year at rest at 20 °C, scaled with
+	// temperature by FadeEaJPerMol (Arrhenius); CycleFadePerCycle the fraction
+	// lost per equivalent full cycle; at EndOfLife (a fraction of the rated
+	// capacity, e.g. 0.8) the cells are due for replacement. Zero for primary
+	// cells.
+	CalendarFadePerYear float64  `json:"calendar_fade_per_year"`
+	FadeEaJPerMol       float64  `json:"fade_activation_energy_j_per_mol"`
+	CycleFadePerCycle   float64  `json:"cycle_fade_per_cycle"`
+	EndOfLife           float64  `json:"end_of_life"`
+	Forms               []Form   `json:"forms"`
+	Sources             []Source `json:"sources"`
 }
 
 // ArrheniusEaCommon is the activation energy that doubles a reaction rate
@@ -66,110 +95,17 @@ const ArrheniusEaCommon = GasConstant * math.Ln2 / (1/298.15 - 1/308.15)
 
 // Library returns the cell library, sorted by ID. Each call returns a fresh
 // copy, so callers may keep or change it.
+//
+// Every number names its source in a comment beside it and in the
+// chemistry's Sources, one row per parameter group: nominal_v,
+// mean_discharge_v, cutoff_v, self_discharge_per_year,
+// activation_energy_j_per_mol, operating_c, capacity_vs_temp, ocv,
+// resistance_vs_temp, forms (capacities), forms.resistance_mohm and
+// forms.max_current_ma; rechargeable chemistries add charge_c, max_charge_c,
+// charge_efficiency, calendar_fade_per_year, fade_activation_energy_j_per_mol,
+// cycle_fade_per_cycle and end_of_life.
 func Library() []Chemistry {
-	lib := []Chemistry{
-		{
-			ID:      "li-socl2",
-			Name:    "lithium thionyl chloride (bobbin)",
-			Primary: true,
-			// IEC 60086-1 designation voltage for ER cells: 3.6 V.
-			NominalV: 3.6,
-			// Bobbin cells hold a flat plateau near 3.5 V at µA–mA loads (from memory).
-			MeanDischargeV: 3.5,
-			// Datasheet end voltage for ER bobbin cells is 2.0 V (from memory).
-			CutoffV: 2.0,
-			// Thionyl chloride: about 1 % per year (Wikipedia "Self-discharge" table;
-			// Linden & Reddy, Handbook of Batteries, 4th ed., 2011, Li primary chapter).
-			SelfDischargePerYear:    0.01,
-			ActivationEnergyJPerMol: ArrheniusEaCommon,
-			// Rated range of bobbin cells, −55 to +85 °C (from memory).
-			OperatingMinC: -55, OperatingMaxC: 85,
-			// Common practice / from memory (REFERENCE-VALUES §6.2: 0.90–0.97 at 0 °C,
-			// 0.70–0.85 at −20 °C at µA–mA loads); −40 °C from memory.
-			CapacityVsTemp: []TempPoint{{-40, 0.55}, {-20, 0.78}, {0, 0.93}, {20, 1}, {40, 1}, {60, 0.97}},
-			// Typical bobbin-cell datasheet capacities at low drain to 2.0 V
-			// (ER14505, ER26500, ER34615; from memory).
-			Forms: []Form{{"AA", 2600}, {"C", 8500}, {"D", 19000}},
-			Sources: []Source{
-				{"nominal_v", "IEC 60086-1 designation voltage for ER cells"},
-				{"mean_discharge_v", "from memory: flat plateau near 3.5 V at low drain"},
-				{"cutoff_v", "from memory: bobbin-cell datasheets rate capacity to 2.0 V"},
-				{"self_discharge_per_year", "Linden & Reddy, Handbook of Batteries, 4th ed. (2011); Wikipedia 'Self-discharge' table: 1 %/yr"},
-				{"activation_energy_j_per_mol", "common practice: rate doubles per 10 °C (Battery University BU-802b)"},
-				{"capacity_vs_temp", "common practice / from memory, after Linden's handbook curves"},
-				{"forms", "from memory: typical ER14505 / ER26500 / ER34615 datasheets"},
-				{"operating_c", "from memory: typical bobbin-cell rating"},
-			},
-		},
-		{
-			ID:      "alkaline",
-			Name:    "alkaline zinc–manganese dioxide",
-			Primary: true,
-			// IEC 60086-1 designation voltage for LR cells: 1.5 V.
-			NominalV: 1.5,
-			// The voltage slopes from 1.5 V to the cut-off; mean near 1.25 V at low
-			// drain (from memory).
-			MeanDischargeV: 1.25,
-			CutoffV:        0.9, // common practice end voltage for 1.5 V devices
-			// 2–4 %/yr, 5–10 yr shelf life: Battery University BU-802b (REFERENCE-VALUES §6.1).
-			SelfDischargePerYear:    0.03,
-			ActivationEnergyJPerMol: ArrheniusEaCommon,
-			OperatingMinC:           -18, OperatingMaxC: 55, // from memory: typical LR6 datasheet rating
-			// Common practice / from memory (REFERENCE-VALUES §6.2: 0.70–0.85 at 0 °C,
-			// 0.10–0.40 at −20 °C at 25–100 mA; better at µA drain).
-			CapacityVsTemp: []TempPoint{{-40, 0.05}, {-20, 0.3}, {0, 0.78}, {20, 1}, {40, 1}, {60, 0.95}},
-			// Low-drain capacities of LR03 / LR6 / LR14 / LR20 (from memory).
-			Forms: []Form{{"AAA", 1150}, {"AA", 2850}, {"C", 8000}, {"D", 17000}},
-			Sources: []Source{
-				{"nominal_v", "IEC 60086-1 designation voltage for LR cells"},
-				{"mean_discharge_v", "from memory: sloping discharge, mean about 1.25 V at low drain"},
-				{"cutoff_v", "common practice: 0.9 V end voltage"},
-				{"self_discharge_per_year", "Battery University BU-802b: 2–4 %/yr, 5–10 yr shelf life"},
-				{"activation_energy_j_per_mol", "common practice: rate doubles per 10 °C (Battery University BU-802b)"},
-				{"capacity_vs_temp", "common practice / from memory, after Linden's handbook curves; strongly rate dependent"},
-				{"forms", "from memory: typical LR03 / LR6 / LR14 / LR20 datasheets at low drain"},
-				{"operating_c", "from memory: typical LR6 datasheet rating"},
-			},
-		},
-		{
-			ID:   "li-ion",
-			Name: "lithium-ion (NMC/LCO)",
-			// Nominal 3.6 V (IEC 61960-3 cells are commonly rated 3.6–3.7 V; from memory).
-			NominalV:       3.6,
-			MeanDischargeV: 3.6,
-			CutoffV:        3.0, // common practice end voltage for protected NMC/LCO cells
-			// 1–2 %/month after the first day, plus about 3 %/month with a protection
-			// circuit: Battery University BU-802b. 2 %/month ≈ 22 %/yr.
-			SelfDischargePerYear:    0.22,
-			ActivationEnergyJPerMol: ArrheniusEaCommon,
-			// Discharge −20 to +60 °C, charge 0 to 45 °C: Battery University BU-410.
-			OperatingMinC: -20, OperatingMaxC: 60,
-			ChargeMinC: 0, ChargeMaxC: 45,
-			// Standard charge at 0.5 C (common practice; IEC 61960-3 rates capacity
-			// after a manufacturer's standard charge).
-			MaxChargeC: 0.5,
-			// Coulombic efficiency above 99 %, energy efficiency of charging about
-			// 95 % at low rates (common practice).
-			ChargeEfficiency: 0.95,
-			// Common practice / from memory (REFERENCE-VALUES §6.2: 0.85–0.90 at 0 °C,
-			// 0.60–0.75 at −20 °C at C/5); −40 °C after Nagasubramanian (2001), ≈5 %.
-			CapacityVsTemp: []TempPoint{{-40, 0.05}, {-20, 0.68}, {0, 0.88}, {20, 1}, {40, 1}, {60, 0.95}},
-			// Typical 18650 and 21700 energy cells (from memory).
-			Forms: []Form{{"18650", 3000}, {"21700", 4800}},
-			Sources: []Source{
-				{"nominal_v", "from memory: IEC 61960-3 cells are rated 3.6–3.7 V"},
-				{"cutoff_v", "common practice: 3.0 V end voltage"},
-				{"self_discharge_per_year", "Battery University BU-802b: 1–2 %/month, 2 %/month used"},
-				{"activation_energy_j_per_mol", "common practice: rate doubles per 10 °C (Battery University BU-802b)"},
-				{"operating_c", "Battery University BU-410: discharge −20 to 60 °C"},
-				{"charge_c", "Battery University BU-410: no charging below 0 °C, up to 45 °C"},
-				{"max_charge_c", "common practice: standard charge at 0.5 C"},
-				{"charge_efficiency", "common practice: about 95 % energy efficiency at low charge rates"},
-				{"capacity_vs_temp", "common practice / from memory; −40 °C after Nagasubramanian, J. Appl. Electrochem. 31 (2001) 99"},
-				{"forms", "from memory: typical 18650 and 21700 energy cells"},
-			},
-		},
-	}
+	lib := []Chemistry{liSOCl2(), liMnO2(), liFeS2(), alkaline(), liIon(), lifePO4(), nimhLSD()}
 	sort.Slice(lib, func(i, j int) bool { return lib[i].ID < lib[j].ID })
 	return lib
 }

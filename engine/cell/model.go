@@ -33,6 +33,38 @@ func (c Chemistry) UsableFraction(tempC float64) float64 {
 	return interpClamped(c.CapacityVsTemp, tempC)
 }
 
+// OCVAt returns the open-circuit voltage of one cell at state of charge soc
+// (0–1), interpolated linearly in OCV and held at the ends.
+func (c Chemistry) OCVAt(soc float64) float64 {
+	if len(c.OCV) == 0 {
+		panic("cell: " + c.ID + " has no OCV curve")
+	}
+	tab := make([]TempPoint, len(c.OCV)) // same interpolation, x = SoC
+	for i, p := range c.OCV {
+		tab[i] = TempPoint{TempC: p.SoC, Fraction: p.V}
+	}
+	return interpClamped(tab, soc)
+}
+
+// ResistanceFactor returns how many times its 20 °C internal resistance a
+// cell has at tempC, interpolated linearly in ResistanceVsTemp and held at
+// the ends.
+func (c Chemistry) ResistanceFactor(tempC float64) float64 {
+	if len(c.ResistanceVsTemp) == 0 {
+		return 1
+	}
+	return interpClamped(c.ResistanceVsTemp, tempC)
+}
+
+// CalendarFadeAt returns the fraction of capacity lost per year at rest at
+// tempC: the 20 °C rate scaled by ArrheniusRatio.
+func (c Chemistry) CalendarFadeAt(tempC float64) float64 {
+	if c.CalendarFadePerYear == 0 {
+		return 0
+	}
+	return c.CalendarFadePerYear * ArrheniusRatio(c.FadeEaJPerMol, 20, tempC)
+}
+
 func interpClamped(tab []TempPoint, x float64) float64 {
 	if len(tab) == 0 {
 		panic("cell: empty capacity table")
@@ -59,6 +91,7 @@ func interpClamped(tab []TempPoint, x float64) float64 {
 // Pack is a battery of identical cells, Series in series × Parallel in parallel.
 type Pack struct {
 	Chem     Chemistry
+	Form     Form // the cells' form factor (its resistance and current limits)
 	Series   int
 	Parallel int
 	// CellCapacityMAh is the rated capacity of one cell.
@@ -68,8 +101,25 @@ type Pack struct {
 // CapacityMAh is the pack's rated capacity (cells in parallel add capacity).
 func (p Pack) CapacityMAh() float64 { return p.CellCapacityMAh * float64(p.Parallel) }
 
+// CutoffV is the pack's end-of-discharge voltage.
+func (p Pack) CutoffV() float64 { return p.Chem.CutoffV * float64(p.Series) }
+
 // NominalV is the pack's nominal voltage (cells in series add voltage).
 func (p Pack) NominalV() float64 { return p.Chem.NominalV * float64(p.Series) }
+
+// ResistanceOhm is the pack's internal resistance at tempC: cells in series
+// add, in parallel divide.
+func (p Pack) ResistanceOhm(tempC float64) float64 {
+	return p.Form.ResistanceMOhm / 1000 * p.Chem.ResistanceFactor(tempC) * float64(p.Series) / float64(p.Parallel)
+}
+
+// TerminalV is the pack's voltage while it delivers currentA at state of
+// charge soc (0–1) and tempC: open-circuit voltage less the drop across the
+// internal resistance (a Thevenin model without the RC branch: pulses of
+// about a second see the DC resistance; common practice).
+func (p Pack) TerminalV(soc, tempC, currentA float64) float64 {
+	return p.Chem.OCVAt(soc)*float64(p.Series) - currentA*p.ResistanceOhm(tempC)
+}
 
 // EnergyWh is the pack's rated energy at 20 °C: capacity × mean discharge
 // voltage × cells.

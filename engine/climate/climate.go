@@ -1,10 +1,6 @@
 package climate
 
-import (
-	"math"
-
-	"nodelife/engine/scenario"
-)
+import "math"
 
 // Model gives the cell temperature (°C) at a local day of year (1 = 1 January
 // 00:00, fractional) and local clock hour (0–24).
@@ -39,19 +35,3 @@ func (s Seasonal) TempC(day, hour float64) float64 {
 }
 
 func (s Seasonal) Constant() bool { return s.AnnualRangeC == 0 && s.DailyRangeC == 0 }
-
-// ForSite returns the temperature model of a scenario's site.
-func ForSite(site scenario.Site) Model {
-	switch site.Placement {
-	case scenario.Fixed:
-		return Constant(site.FixedTempC)
-	case scenario.Indoor:
-		return Constant(site.IndoorTempC)
-	}
-	coldest := 15.5 // mid-January, common practice
-	if site.LatDeg < 0 {
-		coldest += 365.25 / 2
-	}
-	return Seasonal{MeanC: site.OutdoorMeanC, AnnualRangeC: site.OutdoorAnnualRangeC,
-		DailyRangeC: site.OutdoorDailyRangeC, ColdestDay: coldest}
-}

@@ -5,33 +5,23 @@ import (
 	"testing"
 
 	"github.com/stretchr/testify/assert"
-
-	"nodelife/engine/scenario"
 )
 
-func TestPlacements(t *testing.T) {
-	site := scenario.Default().Site
-	site.Placement, site.FixedTempC = scenario.Fixed, -18
-	assert.Equal(t, -18.0, ForSite(site).TempC(100, 12))
-	assert.True(t, ForSite(site).Constant())
-	site.Placement, site.IndoorTempC = scenario.Indoor, 21
-	assert.Equal(t, 21.0, ForSite(site).TempC(200, 3))
-	site.Placement = scenario.Outdoor
-	assert.False(t, ForSite(site).Constant())
+func TestConstant(t *testing.T) {
+	c := Constant(-18)
+	assert.Equal(t, -18.0, c.TempC(100, 12))
+	assert.True(t, c.Constant())
 }
 
 func TestSeasonalCurve(t *testing.T) {
-	site := scenario.Default().Site
-	site.Placement, site.OutdoorMeanC, site.OutdoorAnnualRangeC, site.OutdoorDailyRangeC = scenario.Outdoor, 8, 20, 10
-	north := ForSite(site)
+	north := Seasonal{MeanC: 8, AnnualRangeC: 20, DailyRangeC: 10, ColdestDay: 15.5}
 	// Coldest mid-January at 03:00, warmest mid-July at 15:00: mean ∓ annual/2 ∓ daily/2.
 	assert.InDelta(t, 8-10-5, north.TempC(15.5, 3), 1e-9)
 	assert.InDelta(t, 8+10+5, north.TempC(15.5+365.25/2, 15), 1e-9)
-	// Equinox-ish quarter points sit at the mean (daily term zero at 09:00 and 21:00).
+	// Quarter points sit at the mean (daily term zero at 09:00 and 21:00).
 	assert.InDelta(t, 8, north.TempC(15.5+365.25/4, 9), 1e-9)
-	site.LatDeg = -35
-	south := ForSite(site)
-	assert.InDelta(t, 8+10+5, south.TempC(15.5, 15), 1e-9, "January is summer in the south")
+	assert.False(t, north.Constant())
+	assert.True(t, Seasonal{MeanC: 3}.Constant())
 }
 
 func ExampleSeasonal() {

@@ -3,6 +3,8 @@ package plan
 import (
 	"fmt"
 	"math"
+	"strings"
+	"time"
 
 	"nodelife/engine/scenario"
 	"nodelife/engine/sim"
@@ -39,13 +41,45 @@ func Cautions(s scenario.Scenario, r sim.Result) []Caution {
 		add("solar-installation",
 			"Mount panels and run cables to local electrical codes; work at height needs the usual precautions.")
 	}
+	if !chem.Primary && s.Harvest.Kind != scenario.HarvestNone && r.TempMaxC > chem.ChargeMaxC {
+		add("no-charge-when-hot",
+			"%s cells must not be charged above %.0f °C; the plan stops charging when the cells are warmer, and they reach %.0f °C here. Shade the enclosure or check the charger enforces it.",
+			chem.Name, chem.ChargeMaxC, r.TempMaxC)
+	}
+	if f := r.Pack.Form; f.MaxPulseMA > 0 {
+		peak := s.NodePeakMA()
+		if limit := f.MaxPulseMA * float64(r.Pack.Parallel); peak > limit {
+			add("pulse-current",
+				"The node's peak current of %.0f mA is above the %.0f mA pulse rating of %d %s %s cell(s) in parallel: the voltage will sag on every burst. Fit a buffer capacitor beside the cells, add cells in parallel, or choose a cell rated for pulses.",
+				peak, limit, r.Pack.Parallel, f.Name, chem.Name)
+		}
+		meanMA := r.LoadW.Total() / r.Pack.NominalV() * 1000
+		if limit := f.MaxContinuousMA * float64(r.Pack.Parallel); f.MaxContinuousMA > 0 && meanMA > limit {
+			add("continuous-current",
+				"The node's mean current of %.1f mA is above the cells' %.0f mA continuous rating; choose larger cells or more in parallel.",
+				meanMA, limit)
+		}
+	}
+	if r.BrownoutH > 0 {
+		why := "the cells are outside their rated temperature range"
+		if r.PlannedBrownoutLimit == sim.LimitVoltage {
+			why = "even fresh cells cannot hold the node's minimum voltage under its peak current"
+		}
+		add("brownouts-in-plan",
+			"Even with the swaps as planned, the node browns out for about %.0f hours over the plan, first on %s: %s.",
+			r.BrownoutH, r.PlannedBrownout.Format(time.DateOnly), why)
+	}
 	if chem.ID == "li-socl2" {
 		add("passivation",
-			"Lithium thionyl chloride cells build a passivation layer in storage: the first pulses after a long shelf time can sag (voltage delay). Condition new cells or fit a buffer capacitor if the node wakes a radio.")
+			"Lithium thionyl chloride cells passivate in storage: the first pulses after a long shelf time sag. Condition new cells or fit a buffer capacitor.")
 	}
-	if chem.Primary && chem.ID != "alkaline" {
-		add("lithium-primary",
-			"Lithium primary cells must never be charged, crushed or short-circuited; lithium cells and packs are dangerous goods in transport (UN 38.3 tested, shipped under the carriers' rules).")
+	// Transport: one line, a pointer to the rules, not legal advice.
+	const transport = "dangerous goods in transport: UN 38.3 tested, shipped under the carriers' rules."
+	switch lithium := strings.HasPrefix(chem.ID, "li"); {
+	case lithium && chem.Primary:
+		add("lithium-primary", "Never charge, crush or short-circuit lithium primary cells; they are "+transport)
+	case lithium:
+		add("lithium-transport", "Lithium-ion cells and packs are "+transport)
 	}
 	if !chem.Primary && s.Harvest.Kind == "none" {
 		add("rechargeable-without-harvest",

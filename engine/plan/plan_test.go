@@ -150,3 +150,41 @@ func TestWeatherFileMustBeGiven(t *testing.T) {
 	assert.Equal(t, "site.weather_file", fe.Path)
 	assert.Equal(t, `site.weather_file: "golden.csv" is not loaded (allowed: a TMY3 (.csv) or EPW (.epw) file given with the scenario)`, err.Error())
 }
+
+func TestLimitsAndTheirCautions(t *testing.T) {
+	// A 400 mA burst from one bobbin AA cell, rated for 200 mA pulses
+	// (library): the pulse caution, a voltage end of life, brown-outs.
+	s := scenario.Demo()
+	s.Cells.Form = "AA"
+	peak, minV := 400.0, 3.0
+	s.Node.PeakMA, s.Node.MinInputV = &peak, &minV
+	s.Plan.Years = 1
+	r := mustRun(t, s)
+	assert.Contains(t, codes(r), "pulse-current")
+	assert.Contains(t, codes(r), "brownouts-in-plan")
+	require.NotNil(t, r.EndOfLifeLimit)
+	assert.Equal(t, "voltage", *r.EndOfLifeLimit)
+	require.NotNil(t, r.PlannedBrownout)
+	assert.Equal(t, "voltage", r.PlannedBrownout.Limit)
+	assert.Greater(t, r.BrownoutHours, 0.0)
+
+	// The demo's own node is within every limit: energy ends its cells.
+	r = mustRun(t, scenario.Demo())
+	assert.Equal(t, "energy", *r.EndOfLifeLimit)
+	assert.Nil(t, r.PlannedBrownout)
+	assert.NotContains(t, codes(r), "pulse-current")
+	assert.Contains(t, codes(r), "lithium-primary")
+
+	// Li-ion charged by a panel in a hot desert: charging stops above 45 °C.
+	s = scenario.Demo()
+	s.Site.LatDeg, s.Site.LonDeg, s.Site.Timezone = 30, 31, "Africa/Cairo"
+	s.Site.Placement, s.Site.Climate.Preset = scenario.Outdoor, "hot-desert"
+	s.Harvest.Kind = scenario.HarvestPanel
+	s.Cells.Chemistry, s.Cells.Form = "li-ion", "18650"
+	s.Plan.Years = 1
+	r = mustRun(t, s)
+	assert.Greater(t, r.TempMaxC, 45.0, "the sun on the enclosure adds to 42 °C afternoons")
+	assert.Contains(t, codes(r), "no-charge-when-hot")
+	assert.Contains(t, codes(r), "lithium-transport")
+	assert.Contains(t, codes(r), "solar-installation")
+}

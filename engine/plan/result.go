@@ -17,24 +17,36 @@ const ResultFormat = "nodelife.result/1"
 // Result is the answer for one scenario. Field names are the JSON keys of
 // `nodelife plan --json`, documented in the README.
 type Result struct {
-	Format        string    `json:"format"`
-	Scenario      string    `json:"scenario"`
-	Start         string    `json:"start"`
-	End           string    `json:"end"`
-	LifetimeDays  *float64  `json:"lifetime_days"`
-	Lifetime      string    `json:"lifetime"`
-	FirstBrownout *string   `json:"first_brownout"`
-	Swaps         []Swap    `json:"swaps"`
-	MinSoCPct     float64   `json:"min_soc_pct"`
-	PackWh        float64   `json:"pack_wh"`
-	PackMAh       float64   `json:"pack_mah"`
-	PackV         float64   `json:"pack_v"`
-	AverageLoadMW float64   `json:"average_load_mw"`
-	TempMinC      float64   `json:"temp_min_c"`
-	TempMaxC      float64   `json:"temp_max_c"`
-	EnergyWh      Energy    `json:"energy_wh"`
-	Cautions      []Caution `json:"cautions"`
-	Daily         []Day     `json:"daily"`
+	Format        string   `json:"format"`
+	Scenario      string   `json:"scenario"`
+	Start         string   `json:"start"`
+	End           string   `json:"end"`
+	LifetimeDays  *float64 `json:"lifetime_days"`
+	Lifetime      string   `json:"lifetime"`
+	FirstBrownout *string  `json:"first_brownout"`
+	// EndOfLifeLimit is what ended the first cells: "energy", "voltage" or
+	// "temperature"; null if they outlive the plan.
+	EndOfLifeLimit  *string   `json:"end_of_life_limit"`
+	BrownoutHours   float64   `json:"brownout_hours"`
+	PlannedBrownout *Brownout `json:"planned_brownout"`
+	Swaps           []Swap    `json:"swaps"`
+	MinSoCPct       float64   `json:"min_soc_pct"`
+	PackWh          float64   `json:"pack_wh"`
+	PackMAh         float64   `json:"pack_mah"`
+	PackV           float64   `json:"pack_v"`
+	AverageLoadMW   float64   `json:"average_load_mw"`
+	TempMinC        float64   `json:"temp_min_c"`
+	TempMaxC        float64   `json:"temp_max_c"`
+	EnergyWh        Energy    `json:"energy_wh"`
+	Cautions        []Caution `json:"cautions"`
+	Daily           []Day     `json:"daily"`
+}
+
+// Brownout is the first time the planned cells, swapped as planned, could
+// not carry the node.
+type Brownout struct {
+	Date  string `json:"date"`
+	Limit string `json:"limit"` // "voltage" or "temperature"
 }
 
 // Swap is one planned change of cells.
@@ -53,6 +65,7 @@ type Energy struct {
 	HarvestUnused   float64            `json:"harvest_unused"`
 	ChargeLoss      float64            `json:"charge_loss"`
 	SwappedOut      float64            `json:"swapped_out"`
+	CapacityFade    float64            `json:"capacity_fade"`
 	Remaining       float64            `json:"remaining"`
 }
 
@@ -118,8 +131,13 @@ func FromSim(s scenario.Scenario, r sim.Result) Result {
 	} else {
 		days := r.Flat.Sub(r.Start).Hours() / 24
 		date := r.Flat.Format(time.DateOnly)
-		out.LifetimeDays, out.FirstBrownout = &days, &date
+		limit := r.FlatLimit
+		out.LifetimeDays, out.FirstBrownout, out.EndOfLifeLimit = &days, &date, &limit
 		out.Lifetime = FormatSpan(r.Start, r.Flat)
+	}
+	out.BrownoutHours = r.BrownoutH
+	if !r.PlannedBrownout.IsZero() {
+		out.PlannedBrownout = &Brownout{Date: r.PlannedBrownout.Format(time.DateOnly), Limit: r.PlannedBrownoutLimit}
 	}
 	for _, sw := range r.Swaps {
 		out.Swaps = append(out.Swaps, Swap{Date: sw.Time.Format(time.DateOnly), Reason: sw.Reason})
@@ -128,7 +146,7 @@ func FromSim(s scenario.Scenario, r sim.Result) Result {
 	out.EnergyWh = Energy{
 		Installed: l.InstalledWh, Load: l.LoadWh.Total(), SelfDischarge: l.SelfDischargeWh,
 		Harvested: l.HarvestedWh, HarvestUnused: l.HarvestUnusedWh, ChargeLoss: l.ChargeLossWh,
-		SwappedOut: l.SwappedOutWh, Remaining: l.RemainingWh,
+		SwappedOut: l.SwappedOutWh, CapacityFade: l.FadeWh, Remaining: l.RemainingWh,
 		LoadByComponent: map[string]float64{},
 	}
 	for c := load.Component(0); c < load.NumComponents; c++ {

@@ -4,6 +4,7 @@ import (
 	"strings"
 
 	"nodelife/engine/cell"
+	"nodelife/engine/climate"
 )
 
 // Kind is the JSON type of a field and how its value is checked.
@@ -88,8 +89,20 @@ func Fields() []Field {
 			ref: func(s *Scenario) any { return &s.Site.WeatherFile }},
 		{Path: "site.horizon_deg", Kind: NumberList, Unit: "°", Min: 0, Max: 90, MaxLen: 72, Default: []float64{},
 			Doc: "obstructions: elevation above the horizon at evenly spaced azimuths from north, clockwise", ref: func(s *Scenario) any { return &s.Site.HorizonDeg }},
-		{Path: "site.climate.clearness", Kind: NumberList, Min: 0.05, Max: 0.85, Len: 12, Default: repeat(0.45, 12),
-			Doc: "monthly mean daily clearness index (January first): the share of the sun's energy above the air that reaches the ground", ref: func(s *Scenario) any { return &s.Site.Climate.Clearness }},
+		{Path: "site.indoor_closed_temp_c", Kind: Number, Unit: "°C", Min: -10, Max: 45, Optional: true,
+			Doc: "indoor temperature while the site is closed (a setback); absent: the same as open", ref: func(s *Scenario) any { return &s.Site.IndoorClosedTempC }},
+		{Path: "site.enclosure.absorptance", Kind: Number, Min: 0, Max: 1, Default: 0.5,
+			Doc: "share of sunlight the node's enclosure absorbs outdoors (white 0.2, light grey 0.5, black 0.9)", ref: func(s *Scenario) any { return &s.Site.Enclosure.Absorptance }},
+		{Path: "site.enclosure.u_w_m2k", Kind: Number, Unit: "W/(m²·K)", Min: 5, Max: 100, Default: 25.0,
+			Doc: "heat loss of the enclosure to the air, per m² and K: higher runs cooler in the sun", ref: func(s *Scenario) any { return &s.Site.Enclosure.UWm2K }},
+		{Path: "site.climate.preset", Kind: Choice, Enum: append([]string{"none"}, climate.PresetIDs()...), Default: "none",
+			Doc: "a built-in climate giving monthly normals, clearness and panel losses (northern months; shifted six months south of the equator)", ref: func(s *Scenario) any { return &s.Site.Climate.Preset }},
+		{Path: "site.climate.tmin_c", Kind: NumberList, Unit: "°C", Min: -70, Max: 60, Len: 12, Optional: true,
+			Doc: "monthly mean daily minimum air temperature, January first; absent: the preset's, or the outdoor_* curve without one", ref: func(s *Scenario) any { return &s.Site.Climate.TminC }},
+		{Path: "site.climate.tmax_c", Kind: NumberList, Unit: "°C", Min: -70, Max: 60, Len: 12, Optional: true,
+			Doc: "monthly mean daily maximum air temperature, January first; absent: as tmin_c", ref: func(s *Scenario) any { return &s.Site.Climate.TmaxC }},
+		{Path: "site.climate.clearness", Kind: NumberList, Min: 0.05, Max: 0.85, Len: 12, Optional: true,
+			Doc: "monthly mean daily clearness index (January first): the share of the sun's energy above the air that reaches the ground; absent: the preset's, or 0.45", ref: func(s *Scenario) any { return &s.Site.Climate.Clearness }},
 		{Path: "site.hours.open", Kind: Clock, Default: "07:00",
 			Doc: "opening time, local clock", ref: func(s *Scenario) any { return &s.Site.Hours.Open }},
 		{Path: "site.hours.close", Kind: Clock, Default: "21:00",
@@ -105,6 +118,10 @@ func Fields() []Field {
 			Doc: "constant always-on draw of the node", ref: func(s *Scenario) any { return &s.Node.SleepUW }},
 		{Path: "node.regulator_efficiency", Kind: Number, Min: 0.1, Max: 1, Default: 0.85,
 			Doc: "fraction of the cell's power that reaches the node", ref: func(s *Scenario) any { return &s.Node.RegulatorEfficiency }},
+		{Path: "node.peak_ma", Kind: Number, Unit: "mA", Min: 0.01, Max: 5000, Optional: true,
+			Doc: "the node's peak current from the cells (host and radio burst); absent: 20 mA", ref: func(s *Scenario) any { return &s.Node.PeakMA }},
+		{Path: "node.min_input_v", Kind: Number, Unit: "V", Min: 0.5, Max: 60, Optional: true,
+			Doc: "the lowest cell voltage the node runs on, under its peak current; absent: the cells' cut-off voltage", ref: func(s *Scenario) any { return &s.Node.MinInputV }},
 		{Path: "node.vision.fps", Kind: Number, Unit: "fps", Min: 0, Max: 60, Default: 5.0,
 			Doc: "frames per second of the always-on camera", ref: func(s *Scenario) any { return &s.Node.Vision.FPS }},
 		{Path: "node.vision.frame_uj", Kind: Number, Unit: "µJ", Min: 0, Max: 1e5, Default: 200.0,
@@ -141,10 +158,10 @@ func Fields() []Field {
 			Doc: "change of panel power per °C of cell temperature above 25 °C", ref: func(s *Scenario) any { return &s.Harvest.Panel.TempCoeffPctPerC }},
 		{Path: "harvest.panel.noct_c", Kind: Number, Unit: "°C", Min: 20, Max: 70, Default: 45.0,
 			Doc: "nominal operating cell temperature (800 W/m², 20 °C air)", ref: func(s *Scenario) any { return &s.Harvest.Panel.NOCTC }},
-		{Path: "harvest.panel.soiling_pct", Kind: NumberList, Unit: "%", Min: 0, Max: 100, Len: 12, Default: repeat(2, 12),
-			Doc: "monthly loss to dust and dirt (January first)", ref: func(s *Scenario) any { return &s.Harvest.Panel.SoilingPct }},
-		{Path: "harvest.panel.snow_loss_pct", Kind: NumberList, Unit: "%", Min: 0, Max: 100, Len: 12, Default: repeat(0, 12),
-			Doc: "monthly loss to snow cover (January first); a weather file's snow depth adds to it", ref: func(s *Scenario) any { return &s.Harvest.Panel.SnowLossPct }},
+		{Path: "harvest.panel.soiling_pct", Kind: NumberList, Unit: "%", Min: 0, Max: 100, Len: 12, Optional: true,
+			Doc: "monthly loss to dust and dirt (January first); absent: the climate preset's, or 2 %", ref: func(s *Scenario) any { return &s.Harvest.Panel.SoilingPct }},
+		{Path: "harvest.panel.snow_loss_pct", Kind: NumberList, Unit: "%", Min: 0, Max: 100, Len: 12, Optional: true,
+			Doc: "monthly loss to snow cover (January first); absent: the climate preset's, or none; a weather file's snow depth adds to it", ref: func(s *Scenario) any { return &s.Harvest.Panel.SnowLossPct }},
 		{Path: "harvest.indoor.area_cm2", Kind: Number, Unit: "cm²", Min: 1, Max: 10000, Default: 20.0,
 			Doc: "indoor-light cell area", ref: func(s *Scenario) any { return &s.Harvest.Indoor.AreaCm2 }},
 		{Path: "harvest.indoor.efficiency", Kind: Number, Min: 0.005, Max: 0.5, Default: 0.05,
@@ -192,6 +209,9 @@ func (f Field) Get(s *Scenario) any {
 	case *string:
 		return *p
 	case *[]float64:
+		if f.Optional && *p == nil {
+			return nil
+		}
 		return *p
 	case *[]string:
 		return *p

@@ -213,6 +213,14 @@ func checkString(f Field, str string) string {
 
 // crossChecks tests what depends on more than one field.
 func (p *parser) crossChecks() {
+	if tmin, tmax, ok := p.s.Normals(); ok {
+		for i := range tmin {
+			if tmin[i] > tmax[i] {
+				p.errs = append(p.errs, &FieldError{Path: fmt.Sprintf("site.climate.tmax_c[%d]", i), Value: fmtNum(tmax[i]),
+					Problem: "is below the month's minimum", Allowed: fmt.Sprintf("at least site.climate.tmin_c[%d], %s °C", i, fmtNum(tmin[i])), Err: ErrRange})
+			}
+		}
+	}
 	chem, ok := cell.Lookup(p.s.Cells.Chemistry)
 	if !ok {
 		return // already reported

@@ -4,6 +4,8 @@ import (
 	_ "embed"
 	"time"
 	_ "time/tzdata" // IANA zones inside the binary and the WebAssembly app
+
+	"nodelife/engine/climate"
 )
 
 // Format is the value of the top-level "format" key of this version.
@@ -52,11 +54,24 @@ type Site struct {
 	Climate    Climate
 	Hours      Hours
 	Lighting   Lighting
+	// IndoorClosedTempC is the indoor temperature while the site is closed;
+	// nil: no setback.
+	IndoorClosedTempC *float64
+	Enclosure         Enclosure
 }
 
-// Climate is the site's monthly normals, January first.
+// Enclosure is the node's housing, which the sun warms outdoors.
+type Enclosure struct {
+	Absorptance float64 // share of sunlight absorbed
+	UWm2K       float64 // heat loss to the air, W/(m²·K)
+}
+
+// Climate is the site's monthly normals, January first. Absent lists (nil)
+// come from the preset.
 type Climate struct {
-	Clearness []float64 // monthly mean daily clearness index K̄T
+	Preset       string    // "none" or a climate.Presets ID
+	TminC, TmaxC []float64 // monthly mean daily minimum and maximum, °C
+	Clearness    []float64 // monthly mean daily clearness index K̄T
 }
 
 // Hours are when the site is open, on its local clock.
@@ -74,8 +89,14 @@ type Lighting struct {
 type Node struct {
 	SleepUW             float64 // constant always-on draw at the node, µW
 	RegulatorEfficiency float64 // fraction of cell power that reaches the node
-	Vision              Vision
-	Events              Events
+	// PeakMA is the node's peak current from the cells; nil: NodePeakMA's
+	// default.
+	PeakMA *float64
+	// MinInputV is the lowest cell voltage the node runs on under its peak
+	// current; nil: the cells' cut-off voltage.
+	MinInputV *float64
+	Vision    Vision
+	Events    Events
 }
 
 // Vision is the always-on camera.
@@ -155,6 +176,87 @@ func (s Scenario) PanelAzimuthDeg() float64 {
 		return 0
 	}
 	return 180
+}
+
+// DefaultPeakMA is the node's peak current when the scenario gives none: a
+// microcontroller and a low-power radio transmitting (common practice: BLE
+// and sub-GHz radios draw 5–45 mA at their usual output powers,
+// REFERENCE-VALUES §8).
+const DefaultPeakMA = 20.0
+
+// NodePeakMA returns the node's peak current from the cells, mA.
+func (s Scenario) NodePeakMA() float64 {
+	if s.Node.PeakMA != nil {
+		return *s.Node.PeakMA
+	}
+	return DefaultPeakMA
+}
+
+// NodeMinInputV returns the lowest cell voltage the node runs on: as given,
+// else the pack's cut-off voltage.
+func (s Scenario) NodeMinInputV(packCutoffV float64) float64 {
+	if s.Node.MinInputV != nil {
+		return *s.Node.MinInputV
+	}
+	return packCutoffV
+}
+
+// preset returns the site's climate preset, shifted for its hemisphere.
+func (s Scenario) preset() (climate.Preset, bool) {
+	p, ok := climate.LookupPreset(s.Site.Climate.Preset)
+	return p.ForLatitude(s.Site.LatDeg), ok
+}
+
+// Normals returns the monthly mean daily minimum and maximum temperatures in
+// force: as given, else the preset's; ok is false when there are none (the
+// outdoor_* curve applies).
+func (s Scenario) Normals() (tmin, tmax [12]float64, ok bool) {
+	p, hasPreset := s.preset()
+	tmin, tmax = p.TminC, p.TmaxC
+	if c := s.Site.Climate; c.TminC != nil || c.TmaxC != nil {
+		if c.TminC != nil {
+			copy(tmin[:], c.TminC)
+		}
+		if c.TmaxC != nil {
+			copy(tmax[:], c.TmaxC)
+		}
+		return tmin, tmax, hasPreset || (c.TminC != nil && c.TmaxC != nil)
+	}
+	return tmin, tmax, hasPreset
+}
+
+// Clearness returns the monthly mean clearness index in force: as given,
+// else the preset's, else 0.45 (common practice for a temperate
+// mid-latitude site; Duffie & Beckman's monthly tables mostly span 0.35–0.55,
+// from memory).
+func (s Scenario) Clearness() [12]float64 {
+	return s.monthly(s.Site.Climate.Clearness, func(p climate.Preset) [12]float64 { return p.Clearness }, 0.45)
+}
+
+// PanelSoilingPct and PanelSnowLossPct return the monthly panel losses in
+// force: as given, else the preset's, else 2 % soiling (common practice) and
+// no snow.
+func (s Scenario) PanelSoilingPct() [12]float64 {
+	return s.monthly(s.Harvest.Panel.SoilingPct, func(p climate.Preset) [12]float64 { return p.SoilingPct }, 2)
+}
+
+func (s Scenario) PanelSnowLossPct() [12]float64 {
+	return s.monthly(s.Harvest.Panel.SnowLossPct, func(p climate.Preset) [12]float64 { return p.SnowLossPct }, 0)
+}
+
+func (s Scenario) monthly(given []float64, fromPreset func(climate.Preset) [12]float64, def float64) [12]float64 {
+	var out [12]float64
+	switch p, ok := s.preset(); {
+	case given != nil:
+		copy(out[:], given)
+	case ok:
+		out = fromPreset(p)
+	default:
+		for i := range out {
+			out[i] = def
+		}
+	}
+	return out
 }
 
 func abs(x float64) float64 {

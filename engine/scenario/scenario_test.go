@@ -153,7 +153,7 @@ func TestSyntaxErrorLocation(t *testing.T) {
 func TestSchemaFileIsCurrent(t *testing.T) {
 	file, err := os.ReadFile("schema.json")
 	require.NoError(t, err)
-	assert.Equal(t, string(Schema()), string(file), "schema.json is stale: run `make schema`")
+	assert.True(t, string(Schema()) == string(file), "schema.json is stale: run `make schema`")
 }
 
 // TestSchemaAgreesWithParser reads the published schema on its own terms and

@@ -96,32 +96,39 @@ func TestFullCellsTakeNoMore(t *testing.T) {
 }
 
 func TestChargerRules(t *testing.T) {
-	liion := PackFor(fixedScenario("li-ion", "18650", 20)) // 3 Ah, 3.6 V nominal, 10.8 Wh rated
+	liion := PackFor(fixedScenario("li-ion", "18650", 20))
 	c := newCharger(liion)
-	// 0.5 C × 3 Ah × 3.6 V = 5.4 W (the library's common-practice standard charge).
-	const maxW = 5.4
+	// The charge rate limit is MaxChargeC × rated capacity × nominal voltage
+	// (0.5 C standard charge, common practice); the efficiency the library's.
+	full := liion.EnergyWh()
+	maxW := liion.Chem.MaxChargeC * liion.CapacityMAh() / 1000 * liion.NominalV()
+	eff := liion.Chem.ChargeEfficiency
+	require.Greater(t, maxW, 1.0, "cases below assume a rate limit above 1 W")
 	cases := []struct {
 		name                  string
 		e, surplus, temp, dtH float64
 		stored, lost, unused  float64
 	}{
-		{"within every limit", 5, 1, 20, 1, 0.95, 0.05, 0},
-		{"rate limit", 0, 10, 20, 1, maxW * 0.95, maxW * 0.05, 10 - maxW},
-		{"rate limit, short step", 0, 10, 20, 1.0 / 6, maxW / 6 * 0.95, maxW / 6 * 0.05, 10 - maxW/6},
-		{"room limit", 10.8 - 0.95, 5, 20, 1, 0.95, 0.05, 4},
-		{"full", 10.8, 5, 20, 1, 0, 0, 5},
-		{"below 0 °C (BU-410)", 5, 1, -0.1, 1, 0, 0, 1},
-		{"above 45 °C (BU-410)", 5, 1, 45.1, 1, 0, 0, 1},
-		{"at 0 °C", 5, 1, 0, 1, 0.95, 0.05, 0},
-		{"no surplus", 5, 0, 20, 1, 0, 0, 0},
+		{"within every limit", full / 2, 1, 20, 1, eff, 1 - eff, 0},
+		{"rate limit", 0, maxW + 5, 20, 1, maxW * eff, maxW * (1 - eff), 5},
+		{"rate limit, short step", 0, maxW, 20, 1.0 / 6, maxW / 6 * eff, maxW / 6 * (1 - eff), maxW * 5 / 6},
+		{"room limit", full - eff, 5, 20, 1, eff, 1 - eff, 4},
+		{"full", full, 5, 20, 1, 0, 0, 5},
+		{"below 0 °C (BU-410)", full / 2, 1, -0.1, 1, 0, 0, 1},
+		{"above 45 °C (BU-410)", full / 2, 1, 45.1, 1, 0, 0, 1},
+		{"at 0 °C", full / 2, 1, 0, 1, eff, 1 - eff, 0},
+		{"no surplus", full / 2, 0, 20, 1, 0, 0, 0},
 	}
 	for _, k := range cases {
-		stored, lost, unused := c.charge(k.e, k.surplus, k.temp, k.dtH)
+		stored, lost, unused := c.charge(k.e, full, k.surplus, k.temp, k.dtH)
 		assert.InDeltaf(t, k.stored, stored, 1e-12, "%s: stored", k.name)
 		assert.InDeltaf(t, k.lost, lost, 1e-12, "%s: lost", k.name)
 		assert.InDeltaf(t, k.unused, unused, 1e-12, "%s: unused", k.name)
 	}
+	// A faded pack fills to its reduced capacity.
+	stored, _, _ := c.charge(0.7*full, 0.8*full, 5, 20, 1)
+	assert.InDelta(t, 0.1*full, stored, 1e-12)
 	primary := newCharger(PackFor(fixedScenario("li-socl2", "D", 20)))
-	stored, lost, unused := primary.charge(1, 3, 20, 1)
+	stored, lost, unused := primary.charge(1, 60, 3, 20, 1)
 	assert.Equal(t, [3]float64{0, 0, 3}, [3]float64{stored, lost, unused}, "primary cells are never charged")
 }

@@ -18,6 +18,8 @@ const HoursPerYear = 365.25 * 24
 const (
 	ReasonReserve = "reserve" // the state of charge fell to the reserve
 	ReasonFlat    = "flat"    // the cells went flat before reaching the reserve
+	ReasonVoltage = "voltage" // the voltage under the node's peak current fell below its minimum
+	ReasonFade    = "fade"    // rechargeable cells faded to their end-of-life capacity
 )
 
 // Swap is one change of cells.
@@ -35,6 +37,7 @@ type Ledger struct {
 	LoadWh          load.Breakdown
 	SelfDischargeWh float64
 	SwappedOutWh    float64 // left in cells taken out at swaps
+	FadeWh          float64 // stored energy lost when fading capacity fell below it
 	RemainingWh     float64 // left in the cells at the end
 }
 
@@ -42,7 +45,7 @@ type Ledger struct {
 // (installed + harvested): zero to rounding.
 func (l Ledger) Imbalance() float64 {
 	in := l.InstalledWh + l.HarvestedWh - l.HarvestUnusedWh - l.ChargeLossWh
-	out := l.LoadWh.Total() + l.SelfDischargeWh + l.SwappedOutWh + l.RemainingWh
+	out := l.LoadWh.Total() + l.SelfDischargeWh + l.SwappedOutWh + l.FadeWh + l.RemainingWh
 	return (in - out) / (l.InstalledWh + l.HarvestedWh)
 }
 
@@ -60,15 +63,24 @@ type Result struct {
 	Step       time.Duration
 	Pack       cell.Pack
 	LoadW      load.Breakdown // mean power drawn from the cells, by component
-	// Flat is when the first cell set, never swapped, goes flat; zero if it
-	// outlives the horizon.
+	// Flat is when the first cell set, never swapped, can no longer carry
+	// the node, and FlatLimit why (LimitEnergy, LimitVoltage or
+	// LimitTemperature); zero and "" if it outlives the horizon.
 	Flat      time.Time
-	Swaps     []Swap
-	Ledger    Ledger
-	Days      []Day
-	MinSoCPct float64
-	TempMinC  float64
-	TempMaxC  float64
+	FlatLimit string
+	// PlannedBrownout is the first time the planned cells could not carry
+	// the node although swapped as planned (too cold, or the voltage of
+	// fresh cells too low), and PlannedBrownoutLimit why; BrownoutH is how
+	// many hours that happened in all.
+	PlannedBrownout      time.Time
+	PlannedBrownoutLimit string
+	BrownoutH            float64
+	Swaps                []Swap
+	Ledger               Ledger
+	Days                 []Day
+	MinSoCPct            float64
+	TempMinC             float64
+	TempMaxC             float64
 }
 
 // PackFor returns the pack a scenario describes. It panics on a scenario that
@@ -86,7 +98,7 @@ func PackFor(s scenario.Scenario) cell.Pack {
 	if s.Cells.CapacityMAh > 0 {
 		capMAh = s.Cells.CapacityMAh
 	}
-	return cell.Pack{Chem: chem, Series: s.Cells.Series, Parallel: s.Cells.Parallel, CellCapacityMAh: capMAh}
+	return cell.Pack{Chem: chem, Form: form, Series: s.Cells.Series, Parallel: s.Cells.Parallel, CellCapacityMAh: capMAh}
 }
 
 // Run simulates a scenario that names no weather file over its horizon. It
@@ -112,7 +124,7 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	loadW := load.FromNode(s.Node).CellW()
 	loadTotalW := loadW.Total()
 	reserve := s.Plan.ReservePct / 100
-	chg := newCharger(pack)
+	m := newPackModel(pack, s.NodePeakMA()/1000, s.NodeMinInputV(pack.CutoffV()))
 	// An indoor-light cell sees the site's lights (or daylight outdoors).
 	var indoorCell *harvest.IndoorCell
 	if s.Harvest.Kind == scenario.HarvestIndoor {
@@ -123,17 +135,43 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	outdoor := s.Site.Placement == scenario.Outdoor
 	open := newOpenHours(s.Site.Hours)
 	loc := s.Location()
+	// An indoor setback: a different temperature while the site is closed.
+	setback := s.Site.Placement == scenario.Indoor && s.Site.IndoorClosedTempC != nil
+	var closedC float64
+	if setback {
+		closedC = *s.Site.IndoorClosedTempC
+	}
 	r := Result{Start: start, End: end, Step: step, Pack: pack, LoadW: loadW,
 		MinSoCPct: 100, TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
 	r.Ledger.InstalledWh = ratedWh
-	planned, first := ratedWh, ratedWh // stored energy, Wh
-	firstFlat := false
-	var horizonH float64 // horizon length, h
+	planned, first := newCellSet(ratedWh), newCellSet(ratedWh)
+	firstDone := false
+	var servedH float64 // hours the planned cells carried the node
+
+	// swap replaces the planned cells at instant at.
+	swap := func(at time.Time, reason string) {
+		r.Swaps = append(r.Swaps, Swap{Time: at, Reason: reason})
+		r.Ledger.SwappedOutWh += planned.storedWh
+		r.Ledger.InstalledWh += ratedWh
+		planned = newCellSet(ratedWh)
+	}
+	account := func(res stepResult) {
+		r.Ledger.SelfDischargeWh += res.sdWh
+		r.Ledger.ChargeLossWh += res.lostWh
+		r.Ledger.HarvestUnusedWh += res.unusedWh
+		r.Ledger.FadeWh += res.fadeWh
+	}
+	brownout := func(at time.Time, h float64, limit string) {
+		if r.PlannedBrownout.IsZero() {
+			r.PlannedBrownout, r.PlannedBrownoutLimit = at, limit
+		}
+		r.BrownoutH += h
+	}
 
 	// Temperature-dependent values, recomputed only when the temperature moves.
 	thermal := cell.NewThermal(chem)
 	lastT := math.NaN()
-	var usable, trapped, sdW, socPerWh float64
+	var e stepEnv
 
 	// The environment table is indexed by UTC day and minute of the day.
 	utcDay := start.UTC().Truncate(24 * time.Hour)
@@ -168,83 +206,85 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 				utcDay = utcDay.AddDate(0, 0, 1)
 				rowBase = row(utcDay.Month(), utcDay.Day()) * y.PerDay
 			}
-			T := y.TempC[idx]
+			T := y.CellTempC[idx]
+			if setback && !open.isOpen(weekday, localMinute(day, at, regular, loc)) {
+				T = closedC
+			}
 			if T != lastT {
 				lastT = T
 				var sdPerYear float64
-				usable, sdPerYear = thermal.At(T)
-				trapped = ratedWh * (1 - usable)
-				sdW = sdPerYear * ratedWh / HoursPerYear
-				socPerWh = 100 / (ratedWh * usable)
+				e.usable, sdPerYear = thermal.At(T)
+				e.tempC, e.tempOK = T, T >= chem.OperatingMinC && T <= chem.OperatingMaxC
+				e.rOhm = pack.ResistanceOhm(T)
+				e.sdWh = sdPerYear * ratedWh / HoursPerYear // per hour, scaled below
+				e.calFadePer = chem.CalendarFadeAt(T) / HoursPerYear
 			}
-			loadWh := loadTotalW * dtH
-			sdWh := sdW * dtH
-			horizonH += dtH
-			r.Ledger.SelfDischargeWh += sdWh
+			se := e // this step's copy, per-hour rates scaled to dt
+			se.dtH = dtH
+			se.sdWh *= dtH
+			se.calFadePer *= dtH
+			se.loadWh = loadTotalW * dtH
 
-			// Harvest feeds the load first; only the surplus reaches the cells.
-			var harvestWh, surplusWh float64
+			// Harvest: a panel from the site's table, an indoor-light cell
+			// from the lights (or daylight outdoors).
 			switch {
 			case y.HarvestW != nil:
-				harvestWh = y.HarvestW[idx] * dtH
+				se.harvestWh = y.HarvestW[idx] * dtH
 			case indoorCell != nil:
 				var lux float64
 				if outdoor {
 					lux = y.LuxOutdoor[idx]
 				} else {
-					minute := int(at / time.Minute)
-					if !regular {
-						h, m, _ := day.Add(at).In(loc).Clock()
-						minute = h*60 + m
-					}
-					lux = open.lux(s.Site.Lighting, weekday, minute)
+					lux = open.lux(s.Site.Lighting, weekday, localMinute(day, at, regular, loc))
 				}
-				harvestWh = indoorCell.OutputW(lux) * dtH
+				se.harvestWh = indoorCell.OutputW(lux) * dtH
 			}
-			if harvestWh > 0 {
-				r.Ledger.HarvestedWh += harvestWh
-				surplusWh = max(harvestWh-loadWh, 0)
-			}
-			d.HarvestWh += harvestWh
-			d.LoadWh += loadWh
-			need := loadWh - (harvestWh - surplusWh) + sdWh
+			r.Ledger.HarvestedWh += se.harvestWh
+			d.HarvestWh += se.harvestWh
+			d.LoadWh += se.loadWh
 
-			// The planned cells: swapped when flat within the step.
-			if avail := planned - trapped; avail >= need {
-				planned -= need
-			} else {
-				frac := max(avail, 0) / need
-				planned -= need * frac
-				r.Swaps = append(r.Swaps, Swap{Time: day.Add(at + time.Duration(frac*float64(dt))), Reason: ReasonFlat})
-				r.Ledger.SwappedOutWh += planned
-				r.Ledger.InstalledWh += ratedWh
-				planned = ratedWh - need*(1-frac)
-			}
-			stored, lost, unused := chg.charge(planned, surplusWh, T, dtH)
-			planned += stored
-			r.Ledger.ChargeLossWh += lost
-			r.Ledger.HarvestUnusedWh += unused
-
-			// The first cells, left alone until flat.
-			if !firstFlat {
-				if avail := first - trapped; avail >= need {
-					first -= need
-					stored, _, _ := chg.charge(first, surplusWh, T, dtH)
-					first += stored
+			// The planned cells: swapped when flat within the step (the fresh
+			// set carries the rest of it), when the voltage under the peak
+			// fails (unless they are fresh), or when faded to end of life.
+			res := m.step(&planned, &se, 1)
+			account(res)
+			served := res.carried
+			switch res.limit {
+			case LimitEnergy:
+				swap(day.Add(at+time.Duration(res.carried*float64(dt))), ReasonFlat)
+				rest := m.step(&planned, &se, 1-res.carried)
+				account(rest)
+				served += rest.carried * (1 - res.carried)
+			case LimitVoltage:
+				if m.freshHolds(&se) {
+					swap(day.Add(at+dt), ReasonVoltage)
 				} else {
-					frac := max(avail, 0) / need
-					r.Flat = day.Add(at + time.Duration(frac*float64(dt)))
-					firstFlat = true
+					brownout(day.Add(at), dtH, LimitVoltage)
+				}
+			case LimitTemperature:
+				brownout(day.Add(at), dtH, LimitTemperature)
+			}
+			if m.fading && planned.health <= chem.EndOfLife {
+				swap(day.Add(at+dt), ReasonFade)
+			}
+			servedH += served * dtH
+
+			// The first cells, left alone until they cannot carry the node.
+			if !firstDone {
+				if fr := m.step(&first, &se, 1); fr.limit != "" {
+					r.Flat = day.Add(at) // voltage and temperature fail from the step's start
+					if fr.limit == LimitEnergy {
+						r.Flat = day.Add(at + time.Duration(fr.carried*float64(dt)))
+					}
+					r.FlatLimit = fr.limit
+					firstDone = true
 				}
 			}
 
-			soc := max(planned-trapped, 0) * socPerWh
+			soc := m.socPct(&planned, e.usable)
 			d.SoCMinPct = min(d.SoCMinPct, soc)
 			if reserve > 0 && soc <= reserve*100 {
-				r.Swaps = append(r.Swaps, Swap{Time: day.Add(at + dt), Reason: ReasonReserve})
-				r.Ledger.SwappedOutWh += planned
-				r.Ledger.InstalledWh += ratedWh
-				planned = ratedWh
+				swap(day.Add(at+dt), ReasonReserve)
 				soc = 100
 			}
 			d.SoCMaxPct = max(d.SoCMaxPct, soc)
@@ -264,10 +304,12 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 		}
 		day = next
 	}
+	// The node's load, by component, over the hours the cells carried it
+	// (harvest covering part of it directly included).
 	for k := range loadW {
-		r.Ledger.LoadWh[k] = loadW[k] * horizonH
+		r.Ledger.LoadWh[k] = loadW[k] * servedH
 	}
-	r.Ledger.RemainingWh = planned
+	r.Ledger.RemainingWh = planned.storedWh
 	return r
 }
 
@@ -280,25 +322,35 @@ type charger struct {
 	minC, maxC float64
 	maxW       float64
 	eff        float64
-	fullWh     float64
 }
 
 func newCharger(p cell.Pack) charger {
 	c := p.Chem
 	return charger{can: !c.Primary && c.MaxChargeC > 0, minC: c.ChargeMinC, maxC: c.ChargeMaxC,
-		maxW: c.MaxChargeC * p.CapacityMAh() / 1000 * p.NominalV(), eff: c.ChargeEfficiency, fullWh: p.EnergyWh()}
+		maxW: c.MaxChargeC * p.CapacityMAh() / 1000 * p.NominalV(), eff: c.ChargeEfficiency}
 }
 
-// charge offers surplusWh over dtH hours at tempC to cells holding e Wh. It
-// returns the energy stored, lost to charge inefficiency, and left unused.
-func (c charger) charge(e, surplusWh, tempC, dtH float64) (stored, lost, unused float64) {
+// charge offers surplusWh over dtH hours at tempC to cells holding e Wh of a
+// capacity of fullWh. It returns the energy stored, lost to charge
+// inefficiency, and left unused.
+func (c charger) charge(e, fullWh, surplusWh, tempC, dtH float64) (stored, lost, unused float64) {
 	if surplusWh <= 0 {
 		return 0, 0, 0
 	}
 	if !c.can || tempC < c.minC || tempC > c.maxC {
 		return 0, 0, surplusWh
 	}
-	accepted := min(surplusWh, c.maxW*dtH, max(c.fullWh-e, 0)/c.eff)
+	accepted := min(surplusWh, c.maxW*dtH, max(fullWh-e, 0)/c.eff)
 	stored = accepted * c.eff
 	return stored, accepted - stored, surplusWh - accepted
+}
+
+// localMinute is the local clock minute of the instant at after local
+// midnight day; regular days (no clock change) need no zone lookup.
+func localMinute(day time.Time, at time.Duration, regular bool, loc *time.Location) int {
+	if regular {
+		return int(at / time.Minute)
+	}
+	h, m, _ := day.Add(at).In(loc).Clock()
+	return h*60 + m
 }

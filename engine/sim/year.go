@@ -31,6 +31,7 @@ type Year struct {
 	ResMin     int       // slot length, minutes; divides 1440
 	PerDay     int       // slots per day
 	TempC      []float64 // air or room temperature, °C
+	CellTempC  []float64 // the cells' temperature: outdoors, the air plus the sun on the enclosure
 	GHIWm2     []float64 // global horizontal irradiance, W/m²
 	LuxOutdoor []float64 // daylight illuminance on the horizontal, lx
 	// HarvestW is the power a solar panel delivers to the cells' charger, W;
@@ -89,11 +90,18 @@ func NewYear(s scenario.Scenario, w *weather.Series) (*Year, error) {
 		file = mapWeather(w, y)
 	}
 	fillTemperature(s, y, file)
-	// Sunlight matters outdoors (daylight at the node, the panel) and to an
-	// indoor-light cell placed outdoors; indoors the site's lights rule.
+	y.CellTempC = y.TempC
+	// Sunlight matters outdoors (daylight at the node, the enclosure, the
+	// panel); indoors the site's lights rule.
 	if s.Site.Placement != scenario.Outdoor && !panel {
 		return y, nil
 	}
+	if s.Site.Placement == scenario.Outdoor {
+		y.CellTempC = make([]float64, n)
+	}
+	enc := s.Site.Enclosure
+	soiling, snowLoss := s.PanelSoilingPct(), s.PanelSnowLossPct()
+	clearness := s.Clearness()
 
 	lat, lon := s.Site.LatDeg, s.Site.LonDeg
 	tilt, surfAz := s.PanelTiltDeg(), s.PanelAzimuthDeg()
@@ -142,12 +150,15 @@ func NewYear(s scenario.Scenario, w *weather.Series) (*Year, error) {
 				}
 			} else if zen < 90 {
 				// Mean day of the month: H = K̄T·H0, spread by r_t (per hour → W/m²).
-				kt := s.Site.Climate.Clearness[month-1]
+				kt := clearness[month-1]
 				ghi := kt * h0 * sky.CollaresPereiraRablRt(ha, wsDeg)
 				irr = sky.Erbs(ghi, zen, gon)
 			}
 			y.GHIWm2[i] = irr.GHIWm2
 			y.LuxOutdoor[i] = sky.IlluminanceLx(irr.GHIWm2, sky.DaylightLmPerW)
+			if s.Site.Placement == scenario.Outdoor {
+				y.CellTempC[i] = y.TempC[i] + EnclosureRiseC(irr.GHIWm2, enc.Absorptance, enc.UWm2K)
+			}
 			if !panel || irr.GHIWm2 <= 0 {
 				continue
 			}
@@ -157,7 +168,7 @@ func NewYear(s scenario.Scenario, w *weather.Series) (*Year, error) {
 			poa := surface.HayDavies(irr, zen, az, gon)
 			aoi := sky.AngleOfIncidenceDeg(zen, az, tilt, surfAz)
 			g := poa.BeamWm2*sky.IAMASHRAE(aoi, sky.ASHRAEB0) + poa.SkyDiffuseWm2 + poa.GroundWm2
-			g *= (1 - p.SoilingPct[month-1]/100) * (1 - p.SnowLossPct[month-1]/100)
+			g *= (1 - soiling[month-1]/100) * (1 - snowLoss[month-1]/100)
 			if harvest.SnowCovered(snowCm, tilt) {
 				g = 0
 			}
@@ -186,7 +197,7 @@ func fillTemperature(s scenario.Scenario, y *Year, file *fileSlots) {
 		copy(y.TempC, file.temp)
 		return
 	}
-	clim := climate.ForSite(s.Site)
+	clim := climateFor(s)
 	if clim.Constant() {
 		t := clim.TempC(1, 0)
 		for i := range y.TempC {
@@ -217,4 +228,43 @@ var daysBefore = [12]int{0, 31, 60, 91, 121, 152, 182, 213, 244, 274, 305, 335}
 func (y *Year) Index(t time.Time) int {
 	u := t.UTC()
 	return row(u.Month(), u.Day())*y.PerDay + (u.Hour()*60+u.Minute())/y.ResMin
+}
+
+// climateFor returns the temperature model of a scenario's site: a constant
+// for fixed and indoor placements; outdoors the monthly normals in force
+// (given or from the preset), else the seasonal curve of the outdoor_*
+// fields.
+func climateFor(s scenario.Scenario) climate.Model {
+	switch s.Site.Placement {
+	case scenario.Fixed:
+		return climate.Constant(s.Site.FixedTempC)
+	case scenario.Indoor:
+		return climate.Constant(s.Site.IndoorTempC)
+	}
+	if tmin, tmax, ok := s.Normals(); ok {
+		return climate.Monthly{TminC: tmin, TmaxC: tmax, LatDeg: s.Site.LatDeg}
+	}
+	coldest := 15.5 // mid-January, common practice
+	if s.Site.LatDeg < 0 {
+		coldest += 365.25 / 2
+	}
+	return climate.Seasonal{MeanC: s.Site.OutdoorMeanC, AnnualRangeC: s.Site.OutdoorAnnualRangeC,
+		DailyRangeC: s.Site.OutdoorDailyRangeC, ColdestDay: coldest}
+}
+
+// EnclosureRiseC is how far the sun lifts a small outdoor enclosure above
+// the air, in the steady state of an energy balance with the heat-loss form
+// of Faiman's module-temperature model:
+//
+//	ΔT = α · G / U
+//
+// with G the global horizontal irradiance on its top, α its solar
+// absorptance and U its heat-loss coefficient to the air. Faiman fitted
+// U0 ≈ 25 W/(m²·K) in still air for PV modules (from memory); the enclosure's
+// own thermal mass, which delays and damps the rise, is ignored.
+//
+// Reference: D. Faiman, "Assessing the outdoor operating temperature of
+// photovoltaic modules", Progress in Photovoltaics 16 (2008) 307–315.
+func EnclosureRiseC(ghiWm2, absorptance, uWm2K float64) float64 {
+	return absorptance * max(ghiWm2, 0) / uWm2K
 }
