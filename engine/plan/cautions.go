@@ -53,7 +53,9 @@ func Cautions(s scenario.Scenario, r sim.Result) []Caution {
 				"The node's peak current of %.0f mA is above the %.0f mA pulse rating of %d %s %s cell(s) in parallel: the voltage will sag on every burst. Fit a buffer capacitor beside the cells, add cells in parallel, or choose a cell rated for pulses.",
 				peak, limit, r.Pack.Parallel, f.Name, chem.Name)
 		}
-		meanMA := r.LoadW.Total() / r.Pack.NominalV() * 1000
+		// Constant power through the regulator: the current is highest at the
+		// cut-off voltage.
+		meanMA := r.LoadW.Total() / r.Pack.CutoffV() * 1000
 		if limit := f.MaxContinuousMA * float64(r.Pack.Parallel); f.MaxContinuousMA > 0 && meanMA > limit {
 			add("continuous-current",
 				"The node's mean current of %.1f mA is above the cells' %.0f mA continuous rating; choose larger cells or more in parallel.",
