@@ -3,6 +3,7 @@
 //
 //	nodelife plan [--json] SCENARIO.json   plan one node ("-" reads standard input)
 //	nodelife cells [--json]                the cell library with its sources
+//	nodelife presets [--json]              node profiles, occupancy patterns, climate presets
 //	nodelife demo                          print the built-in demo scenario
 //	nodelife schema                        print the scenario format's JSON Schema
 //	nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
@@ -29,6 +30,7 @@ import (
 	"time"
 
 	"nodelife/engine/cell"
+	"nodelife/engine/climate"
 	"nodelife/engine/load"
 	"nodelife/engine/plan"
 	"nodelife/engine/scenario"
@@ -52,6 +54,7 @@ const usage = `nodelife plans battery life and cell swaps for always-on camera s
 usage:
   nodelife plan [--json] SCENARIO.json   plan one node ("-" reads standard input)
   nodelife cells [--json]                the cell library with its sources
+  nodelife presets [--json]              node profiles, occupancy patterns, climate presets
   nodelife demo                          print the built-in demo scenario
   nodelife schema                        print the scenario format's JSON Schema
   nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
@@ -72,6 +75,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		err = cmdPlan(args[1:], stdin, stdout)
 	case "cells":
 		err = cmdCells(args[1:], stdout)
+	case "presets":
+		err = cmdPresets(args[1:], stdout)
 	case "demo":
 		_, err = stdout.Write(scenario.DemoJSON())
 	case "schema":
@@ -396,5 +401,61 @@ func cmdSun(args []string, stdout io.Writer) error {
 	}
 	fmt.Fprintf(&b, "  extraterrestrial irradiation on the horizontal that day: %.0f Wh/m²\n", rep.ExtraterrestrialDaily)
 	_, err = io.WriteString(stdout, b.String())
+	return err
+}
+
+// presetsReport is the JSON of `nodelife presets`.
+type presetsReport struct {
+	Profiles    []profileReport   `json:"node_profiles"`
+	Occupancies []occupancyReport `json:"occupancies"`
+	Climates    []climate.Preset  `json:"climates"`
+}
+
+type profileReport struct {
+	ID     string         `json:"id"`
+	Name   string         `json:"name"`
+	Note   string         `json:"note"`
+	Values map[string]any `json:"values"`
+}
+
+type occupancyReport struct {
+	ID     string         `json:"id"`
+	Name   string         `json:"name"`
+	Weekly [7][24]float64 `json:"weekly_at_1_per_hour"`
+}
+
+func cmdPresets(args []string, stdout io.Writer) error {
+	fs := newFlags("presets")
+	asJSON := fs.Bool("json", false, "print JSON")
+	if err := parseFlags(fs, args); err != nil {
+		return err
+	}
+	var rep presetsReport
+	for _, p := range scenario.Profiles() {
+		rep.Profiles = append(rep.Profiles, profileReport{p.ID, p.Name, p.Note, p.Values})
+	}
+	for _, o := range load.Occupancies() {
+		rep.Occupancies = append(rep.Occupancies, occupancyReport{o.ID, o.Name, o.Weekly(1)})
+	}
+	rep.Climates = climate.Presets()
+	if *asJSON {
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(rep)
+	}
+	var b strings.Builder
+	b.WriteString("Node profiles (node.profile):\n")
+	for _, p := range rep.Profiles {
+		fmt.Fprintf(&b, "  %-18s %s: %s\n", p.ID, p.Name, p.Note)
+	}
+	b.WriteString("Occupancy patterns (node.events.occupancy):\n")
+	for _, o := range rep.Occupancies {
+		fmt.Fprintf(&b, "  %-18s %s\n", o.ID, o.Name)
+	}
+	b.WriteString("Climate presets (site.climate.preset):\n")
+	for _, c := range rep.Climates {
+		fmt.Fprintf(&b, "  %-18s %s: %s\n", c.ID, c.Name, c.Note)
+	}
+	_, err := io.WriteString(stdout, b.String())
 	return err
 }

@@ -246,3 +246,27 @@ func codesOf(r plan.Result) []string {
 	}
 	return cs
 }
+
+func TestPresetsCommand(t *testing.T) {
+	code, out, _ := runCmd(t, "", "presets", "--json")
+	require.Equal(t, 0, code)
+	var rep struct {
+		Profiles []struct {
+			ID     string         `json:"id"`
+			Values map[string]any `json:"values"`
+		} `json:"node_profiles"`
+		Occupancies []struct{ ID string } `json:"occupancies"`
+		Climates    []struct {
+			ID    string    `json:"id"`
+			TminC []float64 `json:"tmin_c"`
+		} `json:"climates"`
+	}
+	require.NoError(t, json.Unmarshal([]byte(out), &rep))
+	assert.Len(t, rep.Profiles, len(scenario.Profiles()))
+	assert.NotEmpty(t, rep.Profiles[0].Values)
+	assert.NotEmpty(t, rep.Occupancies)
+	assert.Len(t, rep.Climates[0].TminC, 12)
+	code, out, _ = runCmd(t, "", "presets")
+	assert.Equal(t, 0, code)
+	assert.Contains(t, out, "doorway-counter")
+}

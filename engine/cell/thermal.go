@@ -11,11 +11,21 @@ import "math"
 // k = Ea/(R·T²), 0.074 /K at 20 °C (3e-6) and 0.17 /K at −80 °C (1.5e-5).
 // Outside the grid it computes the values directly.
 type Thermal struct {
-	chem     Chemistry
-	usable   []float64
-	sdPerYr  []float64
-	minC     float64
-	perKelvn float64
+	chem      Chemistry
+	usable    []float64
+	sdPerYr   []float64
+	rFactor   []float64
+	fadePerYr []float64
+	minC      float64
+	perKelvn  float64
+}
+
+// Values are a chemistry's temperature-dependent values at one temperature.
+type Values struct {
+	Usable           float64 // usable fraction of capacity
+	SelfDischargeYr  float64 // self-discharge, fraction of rated capacity per year
+	ResistanceFactor float64 // internal resistance relative to 20 °C
+	CalendarFadeYr   float64 // calendar fade, fraction of capacity per year
 }
 
 const (
@@ -28,13 +38,30 @@ const (
 func NewThermal(c Chemistry) *Thermal {
 	n := int((thermalMaxC-thermalMinC)*thermalSteps) + 1
 	th := &Thermal{chem: c, usable: make([]float64, n), sdPerYr: make([]float64, n),
-		minC: thermalMinC, perKelvn: thermalSteps}
+		rFactor: make([]float64, n), fadePerYr: make([]float64, n), minC: thermalMinC, perKelvn: thermalSteps}
 	for i := range n {
 		t := thermalMinC + float64(i)/thermalSteps
 		th.usable[i] = c.UsableFraction(t)
 		th.sdPerYr[i] = c.SelfDischargeAt(t)
+		th.rFactor[i] = c.ResistanceFactor(t)
+		th.fadePerYr[i] = c.CalendarFadeAt(t)
 	}
 	return th
+}
+
+// All returns every temperature-dependent value at tempC, interpolated like
+// At (the resistance table is piecewise linear on the grid, so exact; the
+// calendar fade is Arrhenius, within 2e-5).
+func (th *Thermal) All(tempC float64) Values {
+	x := (tempC - th.minC) * th.perKelvn
+	i := int(math.Floor(x))
+	if i < 0 || i >= len(th.usable)-1 || math.IsNaN(x) {
+		c := th.chem
+		return Values{c.UsableFraction(tempC), c.SelfDischargeAt(tempC), c.ResistanceFactor(tempC), c.CalendarFadeAt(tempC)}
+	}
+	f := x - float64(i)
+	lerp := func(a []float64) float64 { return a[i] + f*(a[i+1]-a[i]) }
+	return Values{lerp(th.usable), lerp(th.sdPerYr), lerp(th.rFactor), lerp(th.fadePerYr)}
 }
 
 // At returns the usable fraction and the self-discharge (fraction of rated

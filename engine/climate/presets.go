@@ -10,15 +10,17 @@ package climate
 // 259–263): common practice, not any station's record. Each is editable
 // month by month in the scenario.
 type Preset struct {
-	ID   string
-	Name string
+	ID   string `json:"id"`
+	Name string `json:"name"`
 	// TminC and TmaxC are the mean daily minimum and maximum air temperature.
-	TminC, TmaxC [12]float64
+	TminC [12]float64 `json:"tmin_c"`
+	TmaxC [12]float64 `json:"tmax_c"`
 	// Clearness is the monthly mean daily clearness index K̄T.
-	Clearness [12]float64
+	Clearness [12]float64 `json:"clearness"`
 	// SoilingPct and SnowLossPct are typical monthly panel losses.
-	SoilingPct, SnowLossPct [12]float64
-	Note                    string
+	SoilingPct  [12]float64 `json:"soiling_pct"`
+	SnowLossPct [12]float64 `json:"snow_loss_pct"`
+	Note        string      `json:"note"`
 }
 
 // Presets lists the built-in climates.

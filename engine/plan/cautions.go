@@ -47,7 +47,7 @@ func Cautions(s scenario.Scenario, r sim.Result) []Caution {
 			chem.Name, chem.ChargeMaxC, r.TempMaxC)
 	}
 	if f := r.Pack.Form; f.MaxPulseMA > 0 {
-		peak := s.NodePeakMA()
+		peak := sim.NodePeakMA(s)
 		if limit := f.MaxPulseMA * float64(r.Pack.Parallel); peak > limit {
 			add("pulse-current",
 				"The node's peak current of %.0f mA is above the %.0f mA pulse rating of %d %s %s cell(s) in parallel: the voltage will sag on every burst. Fit a buffer capacitor beside the cells, add cells in parallel, or choose a cell rated for pulses.",

@@ -58,7 +58,7 @@ func TestResultOfDemo(t *testing.T) {
 		byComp += wh
 	}
 	assert.InEpsilon(t, e.Load, byComp, 1e-12)
-	assert.Equal(t, []string{"events", "regulator", "sleep", "vision"}, slices.Sorted(maps.Keys(e.LoadByComponent)))
+	assert.Equal(t, []string{"events", "illuminator", "radio", "regulator", "sleep", "vision"}, slices.Sorted(maps.Keys(e.LoadByComponent)))
 	// One daily row per day of the horizon.
 	end, _ := time.Parse(time.DateOnly, r.End)
 	assert.Len(t, r.Daily, int(end.Sub(start).Hours()/24+0.5))
@@ -187,4 +187,22 @@ func TestLimitsAndTheirCautions(t *testing.T) {
 	assert.Contains(t, codes(r), "no-charge-when-hot")
 	assert.Contains(t, codes(r), "lithium-transport")
 	assert.Contains(t, codes(r), "solar-installation")
+}
+
+// Every node profile, at the demo's store, gives a plan in the trade's
+// range: a mean draw between 0.1 and 10 mW (always-on vision of this class
+// runs on the order of 1 mW; common practice) and a finite life on an AA
+// cell.
+func TestProfilesGiveSensiblePlans(t *testing.T) {
+	for _, p := range scenario.Profiles() {
+		s := scenario.Demo()
+		s.Cells.Form, s.Plan.Years = "AA", 20 // small cells, long plan: every profile ends them
+		require.True(t, scenario.ApplyProfile(&s, p.ID))
+		r := mustRun(t, s)
+		assert.Greater(t, r.AverageLoadMW, 0.1, p.ID)
+		assert.Less(t, r.AverageLoadMW, 10.0, p.ID)
+		assert.NotNil(t, r.LifetimeDays, p.ID)
+		assert.InEpsilon(t, r.EnergyWh.Installed+r.EnergyWh.Harvested-r.EnergyWh.HarvestUnused-r.EnergyWh.ChargeLoss,
+			r.EnergyWh.Load+r.EnergyWh.SelfDischarge+r.EnergyWh.SwappedOut+r.EnergyWh.CapacityFade+r.EnergyWh.Remaining, 1e-9, p.ID)
+	}
 }

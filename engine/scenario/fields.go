@@ -5,6 +5,7 @@ import (
 
 	"nodelife/engine/cell"
 	"nodelife/engine/climate"
+	"nodelife/engine/load"
 )
 
 // Kind is the JSON type of a field and how its value is checked.
@@ -20,6 +21,7 @@ const (
 	Clock                  // a JSON string "HH:MM", 00:00 to 24:00
 	NumberList             // a JSON array of numbers, each within [Min, Max]
 	ChoiceList             // a JSON array of distinct strings from Enum
+	Bool                   // a JSON true or false
 )
 
 // Field describes one leaf of the scenario file.
@@ -114,22 +116,68 @@ func Fields() []Field {
 		{Path: "site.lighting.closed_lux", Kind: Number, Unit: "lx", Min: 0, Max: 100000, Default: 0.0,
 			Doc: "illuminance at the node while the site is closed", ref: func(s *Scenario) any { return &s.Site.Lighting.ClosedLux }},
 
+		{Path: "node.profile", Kind: Choice, Enum: append([]string{"custom"}, ProfileIDs()...), Default: "custom",
+			Doc: "a node profile of ours whose values fill every node field the file leaves out", ref: func(s *Scenario) any { return &s.Node.Profile }},
 		{Path: "node.sleep_uw", Kind: Number, Unit: "µW", Min: 0, Max: 1e6, Default: 50.0,
 			Doc: "constant always-on draw of the node", ref: func(s *Scenario) any { return &s.Node.SleepUW }},
 		{Path: "node.regulator_efficiency", Kind: Number, Min: 0.1, Max: 1, Default: 0.85,
 			Doc: "fraction of the cell's power that reaches the node", ref: func(s *Scenario) any { return &s.Node.RegulatorEfficiency }},
+		{Path: "node.regulator_quiescent_ua", Kind: Number, Unit: "µA", Min: 0, Max: 1000, Default: 0.0,
+			Doc: "the regulator's own quiescent current from the cells", ref: func(s *Scenario) any { return &s.Node.RegulatorQuiescentUA }},
 		{Path: "node.peak_ma", Kind: Number, Unit: "mA", Min: 0.01, Max: 5000, Optional: true,
-			Doc: "the node's peak current from the cells (host and radio burst); absent: 20 mA", ref: func(s *Scenario) any { return &s.Node.PeakMA }},
+			Doc: "the node's peak current from the cells (host and radio burst); absent: the radio's peak, at least 20 mA", ref: func(s *Scenario) any { return &s.Node.PeakMA }},
 		{Path: "node.min_input_v", Kind: Number, Unit: "V", Min: 0.5, Max: 60, Optional: true,
 			Doc: "the lowest cell voltage the node runs on, under its peak current; absent: the cells' cut-off voltage", ref: func(s *Scenario) any { return &s.Node.MinInputV }},
 		{Path: "node.vision.fps", Kind: Number, Unit: "fps", Min: 0, Max: 60, Default: 5.0,
 			Doc: "frames per second of the always-on camera", ref: func(s *Scenario) any { return &s.Node.Vision.FPS }},
 		{Path: "node.vision.frame_uj", Kind: Number, Unit: "µJ", Min: 0, Max: 1e5, Default: 200.0,
 			Doc: "energy per frame: sensor readout plus processing", ref: func(s *Scenario) any { return &s.Node.Vision.FrameUJ }},
+		{Path: "node.vision.closed_fps", Kind: Number, Unit: "fps", Min: 0, Max: 60, Optional: true,
+			Doc: "frames per second while the site is closed; absent: fps", ref: func(s *Scenario) any { return &s.Node.Vision.ClosedFPS }},
+		{Path: "node.vision.dark_fps", Kind: Number, Unit: "fps", Min: 0, Max: 60, Optional: true,
+			Doc: "at most this many frames per second while the scene is dark (below the illuminator's threshold); absent: no limit", ref: func(s *Scenario) any { return &s.Node.Vision.DarkFPS }},
+		{Path: "node.vision.busy_fps", Kind: Number, Unit: "fps", Min: 0, Max: 60, Optional: true,
+			Doc: "frames per second while someone is in view; absent: no change", ref: func(s *Scenario) any { return &s.Node.Vision.BusyFPS }},
+		{Path: "node.vision.empty_share", Kind: Number, Min: 0, Max: 1, Default: 1.0,
+			Doc: "what a frame of an empty scene costs, as a share of frame_uj (processing stops early)", ref: func(s *Scenario) any { return &s.Node.Vision.EmptyShare }},
+		{Path: "node.vision.sensor_mw", Kind: Number, Unit: "mW", Min: 0, Max: 1000, Default: 0.0,
+			Doc: "sensor power while exposing; exposures grow in dim light", ref: func(s *Scenario) any { return &s.Node.Vision.SensorMW }},
+		{Path: "node.vision.exposure_ms_at_100lux", Kind: Number, Unit: "ms", Min: 0.01, Max: 1000, Default: 10.0,
+			Doc: "exposure time at 100 lx; it scales inversely with the scene's illuminance", ref: func(s *Scenario) any { return &s.Node.Vision.ExposureMSAt100Lux }},
+		{Path: "node.vision.max_exposure_ms", Kind: Number, Unit: "ms", Min: 0.01, Max: 1000, Default: 66.0,
+			Doc: "the longest exposure", ref: func(s *Scenario) any { return &s.Node.Vision.MaxExposureMS }},
+		{Path: "node.illuminator.power_mw", Kind: Number, Unit: "mW", Min: 0, Max: 10000, Default: 0.0,
+			Doc: "LED power while lit; 0 for none", ref: func(s *Scenario) any { return &s.Node.Illuminator.PowerMW }},
+		{Path: "node.illuminator.pulse_ms", Kind: Number, Unit: "ms", Min: 0, Max: 1000, Default: 5.0,
+			Doc: "LED on-time per frame", ref: func(s *Scenario) any { return &s.Node.Illuminator.PulseMS }},
+		{Path: "node.illuminator.threshold_lux", Kind: Number, Unit: "lx", Min: 0, Max: 10000, Default: 5.0,
+			Doc: "the LED lights frames when the scene is darker than this", ref: func(s *Scenario) any { return &s.Node.Illuminator.ThresholdLux }},
 		{Path: "node.events.per_hour", Kind: Number, Unit: "/h", Min: 0, Max: 3600, Default: 10.0,
 			Doc: "detections per hour that wake the host", ref: func(s *Scenario) any { return &s.Node.Events.PerHour }},
 		{Path: "node.events.wake_mj", Kind: Number, Unit: "mJ", Min: 0, Max: 1e5, Default: 50.0,
-			Doc: "energy per event: host wake plus radio message", ref: func(s *Scenario) any { return &s.Node.Events.WakeMJ }},
+			Doc: "energy per wake: host power × awake time", ref: func(s *Scenario) any { return &s.Node.Events.WakeMJ }},
+		{Path: "node.events.occupancy", Kind: Choice, Enum: append([]string{"flat"}, load.OccupancyIDs()...), Default: "flat",
+			Doc: "weekly pattern of detections around per_hour, its weekly mean (flat: the same every hour)", ref: func(s *Scenario) any { return &s.Node.Events.Occupancy }},
+		{Path: "node.events.weekly", Kind: NumberList, Unit: "/h", Min: 0, Max: 3600, Len: 168, Optional: true,
+			Doc: "detections per hour for each hour of the week, Monday 00:00 first, local clock; replaces per_hour and occupancy", ref: func(s *Scenario) any { return &s.Node.Events.Weekly }},
+		{Path: "node.events.dwell_s", Kind: Number, Unit: "s", Min: 0, Max: 3600, Default: 10.0,
+			Doc: "how long a detected presence stays in view", ref: func(s *Scenario) any { return &s.Node.Events.DwellS }},
+		{Path: "node.events.holdoff_s", Kind: Number, Unit: "s", Min: 0, Max: 3600, Default: 0.0,
+			Doc: "detections closer than this merge into one wake", ref: func(s *Scenario) any { return &s.Node.Events.HoldoffS }},
+		{Path: "node.events.awake_s", Kind: Number, Unit: "s", Min: 0, Max: 600, Default: 2.0,
+			Doc: "how long the host stays up per wake", ref: func(s *Scenario) any { return &s.Node.Events.AwakeS }},
+		{Path: "node.events.pause_vision", Kind: Bool, Default: false,
+			Doc: "stop looking while the host is up", ref: func(s *Scenario) any { return &s.Node.Events.PauseVision }},
+		{Path: "node.radio.class", Kind: Choice, Enum: []string{"none", "fixed", "ble", "lora", "wifi", "lpwa"}, Default: "none",
+			Doc: "the radio: none (wake_mj includes the message), fixed (message_mj each), or a radio class computed per message", ref: func(s *Scenario) any { return &s.Node.Radio.Class }},
+		{Path: "node.radio.message_mj", Kind: Number, Unit: "mJ", Min: 0, Max: 1e5, Default: 0.0,
+			Doc: "energy per message for class fixed", ref: func(s *Scenario) any { return &s.Node.Radio.MessageMJ }},
+		{Path: "node.radio.payload_bytes", Kind: Integer, Unit: "B", Min: 0, Max: 222, Default: 20,
+			Doc: "application payload per message (BLE advertising: at most 31)", ref: func(s *Scenario) any { return &s.Node.Radio.PayloadBytes }},
+		{Path: "node.radio.lora_sf", Kind: Integer, Min: 7, Max: 12, Default: 9,
+			Doc: "LoRa spreading factor (125 kHz, coding rate 4/5)", ref: func(s *Scenario) any { return &s.Node.Radio.LoRaSF }},
+		{Path: "node.heartbeat.per_day", Kind: Number, Unit: "/d", Min: 0, Max: 1440, Default: 0.0,
+			Doc: "periodic status messages per day", ref: func(s *Scenario) any { return &s.Node.Heartbeat.PerDay }},
 
 		{Path: "cells.chemistry", Kind: Choice, Enum: cell.IDs(), Default: "li-socl2",
 			Doc: "cell chemistry", ref: func(s *Scenario) any { return &s.Cells.Chemistry }},
@@ -215,6 +263,8 @@ func (f Field) Get(s *Scenario) any {
 		return *p
 	case *[]string:
 		return *p
+	case *bool:
+		return *p
 	}
 	panic("scenario: field " + f.Path + " has no value")
 }
@@ -234,6 +284,8 @@ func (f Field) setDefault(s *Scenario) {
 		*p = append([]float64{}, f.Default.([]float64)...)
 	case *[]string:
 		*p = append([]string{}, f.Default.([]string)...)
+	case *bool:
+		*p = f.Default.(bool)
 	}
 }
 

@@ -28,11 +28,12 @@ func Parse(data []byte) (Scenario, error) {
 		return Scenario{}, Errors{&FieldError{Path: "(top level)", Value: short(root.Raw),
 			Problem: "is not a JSON object", Allowed: `an object such as {"format": "` + Format + `", …}`, Err: ErrType}}
 	}
-	p := parser{fields: map[string]Field{}, objects: objects(), s: Default()}
+	p := parser{fields: map[string]Field{}, objects: objects(), s: Default(), present: map[string]bool{}}
 	for _, f := range Fields() {
 		p.fields[f.Path] = f
 	}
 	p.object("", root)
+	p.applyProfile()
 	p.crossChecks()
 	if len(p.errs) > 0 {
 		return Scenario{}, p.errs
@@ -45,6 +46,20 @@ type parser struct {
 	objects map[string]bool
 	s       Scenario
 	errs    Errors
+	present map[string]bool // leaf paths the file gives
+}
+
+// applyProfile fills the node fields the file leaves out from its profile.
+func (p *parser) applyProfile() {
+	prof, ok := LookupProfile(p.s.Node.Profile)
+	if !ok {
+		return
+	}
+	for path, v := range prof.Values {
+		if !p.present[path] {
+			p.fields[path].set(&p.s, v)
+		}
+	}
 }
 
 func (p *parser) fail(path string, value gjson.Result, problem, allowed string, sentinel error) {
@@ -79,10 +94,17 @@ func (p *parser) object(prefix string, obj gjson.Result) {
 }
 
 func (p *parser) leaf(f Field, v gjson.Result) {
+	p.present[f.Path] = true
 	if v.Type == gjson.Null && f.Optional {
 		return
 	}
 	switch f.Kind {
+	case Bool:
+		if v.Type != gjson.True && v.Type != gjson.False {
+			p.fail(f.Path, v, "is not true or false", "true or false", ErrType)
+			return
+		}
+		*f.ref(&p.s).(*bool) = v.Bool()
 	case Number, Integer:
 		x, ok := p.number(f, f.Path, v)
 		if !ok {
@@ -213,6 +235,10 @@ func checkString(f Field, str string) string {
 
 // crossChecks tests what depends on more than one field.
 func (p *parser) crossChecks() {
+	if r := p.s.Node.Radio; r.Class == "ble" && r.PayloadBytes > 31 {
+		p.errs = append(p.errs, &FieldError{Path: "node.radio.payload_bytes", Value: strconv.Itoa(r.PayloadBytes),
+			Problem: "is too long for BLE advertising", Allowed: "0 to 31 bytes of advertising data with node.radio.class ble", Err: ErrRange})
+	}
 	if tmin, tmax, ok := p.s.Normals(); ok {
 		for i := range tmin {
 			if tmin[i] > tmax[i] {
@@ -352,6 +378,8 @@ func allowedText(f Field) string {
 		return s
 	case ChoiceList:
 		return "a list of distinct values from " + allowedText(Field{Kind: Choice, Enum: f.Enum})
+	case Bool:
+		return "true or false"
 	}
 	return rangeText(f)
 }

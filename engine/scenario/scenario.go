@@ -87,28 +87,63 @@ type Lighting struct {
 
 // Node is the sensor node's own consumption.
 type Node struct {
-	SleepUW             float64 // constant always-on draw at the node, µW
-	RegulatorEfficiency float64 // fraction of cell power that reaches the node
-	// PeakMA is the node's peak current from the cells; nil: NodePeakMA's
-	// default.
+	Profile              string  // "custom" or a Profiles ID
+	SleepUW              float64 // constant always-on draw at the node, µW
+	RegulatorEfficiency  float64 // fraction of cell power that reaches the node
+	RegulatorQuiescentUA float64 // the regulator's own draw from the cells, µA
+	// PeakMA is the node's peak current from the cells; nil: the radio's
+	// peak, at least DefaultPeakMA (sim.NodePeakMA).
 	PeakMA *float64
 	// MinInputV is the lowest cell voltage the node runs on under its peak
 	// current; nil: the cells' cut-off voltage.
-	MinInputV *float64
-	Vision    Vision
-	Events    Events
+	MinInputV   *float64
+	Vision      Vision
+	Illuminator Illuminator
+	Events      Events
+	Radio       Radio
+	Heartbeat   Heartbeat
 }
 
 // Vision is the always-on camera.
 type Vision struct {
-	FPS     float64 // frames per second
-	FrameUJ float64 // energy per frame, µJ
+	FPS     float64 // frames per second while the site is open
+	FrameUJ float64 // readout and processing energy of a busy frame, µJ
+	// ClosedFPS, DarkFPS and BusyFPS: nil leaves FPS as it is.
+	ClosedFPS, DarkFPS, BusyFPS *float64
+	EmptyShare                  float64 // an empty frame's share of FrameUJ
+	SensorMW                    float64 // sensor power while exposing
+	ExposureMSAt100Lux          float64
+	MaxExposureMS               float64
+}
+
+// Illuminator is the LED that lights dark scenes.
+type Illuminator struct {
+	PowerMW, PulseMS, ThresholdLux float64
 }
 
 // Events are detections that wake a host processor and send a message.
 type Events struct {
-	PerHour float64
-	WakeMJ  float64 // energy per event, host wake plus radio message, mJ
+	PerHour     float64   // mean over the week
+	WakeMJ      float64   // host energy per wake, mJ
+	Occupancy   string    // "flat" or a load.Occupancies ID
+	Weekly      []float64 // 168 hourly rates, Monday 00:00 first; nil: PerHour × Occupancy
+	DwellS      float64
+	HoldoffS    float64
+	AwakeS      float64
+	PauseVision bool
+}
+
+// Radio is how the node sends its messages.
+type Radio struct {
+	Class        string // "none", "fixed" or a radio.Class
+	MessageMJ    float64
+	PayloadBytes int
+	LoRaSF       int
+}
+
+// Heartbeat is a periodic status message.
+type Heartbeat struct {
+	PerDay float64
 }
 
 // Cells are the node's battery.
@@ -183,14 +218,6 @@ func (s Scenario) PanelAzimuthDeg() float64 {
 // and sub-GHz radios draw 5–45 mA at their usual output powers,
 // REFERENCE-VALUES §8).
 const DefaultPeakMA = 20.0
-
-// NodePeakMA returns the node's peak current from the cells, mA.
-func (s Scenario) NodePeakMA() float64 {
-	if s.Node.PeakMA != nil {
-		return *s.Node.PeakMA
-	}
-	return DefaultPeakMA
-}
 
 // NodeMinInputV returns the lowest cell voltage the node runs on: as given,
 // else the pack's cut-off voltage.

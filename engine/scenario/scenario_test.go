@@ -227,6 +227,11 @@ func TestSchemaAgreesWithParser(t *testing.T) {
 				checkNumber(t, prop, typ, accept, reject)
 			case "array":
 				checkArray(t, prop, accept, reject)
+			case "boolean":
+				accept("true")
+				accept("false")
+				reject(`"yes"`, ErrType)
+				reject("1", ErrType)
 			case "string":
 				reject("12", ErrType)
 				if enum, ok := prop["enum"].([]any); ok {
@@ -358,4 +363,39 @@ func TestEditDistance(t *testing.T) {
 	assert.Equal(t, 2, editDistance("fsp", "fps"))
 	assert.Equal(t, 3, editDistance("kitten", "sitting")) // the textbook example
 	assert.Equal(t, 1, editDistance("ü", "u"))
+}
+
+func TestProfilesFillWhatTheFileLeavesOut(t *testing.T) {
+	s, err := Parse([]byte(`{"node": {"profile": "doorway-counter", "vision": {"fps": 3}}}`))
+	require.NoError(t, err)
+	assert.Equal(t, 3.0, s.Node.Vision.FPS, "the file's own value wins")
+	require.NotNil(t, s.Node.Vision.BusyFPS)
+	assert.Equal(t, 15.0, *s.Node.Vision.BusyFPS, "the profile fills the rest")
+	assert.Equal(t, "lora", s.Node.Radio.Class)
+	assert.Equal(t, "corridor", s.Node.Events.Occupancy)
+	// Written out and read back, the scenario is the same (every field explicit).
+	back, err := Parse(s.JSON())
+	require.NoError(t, err)
+	assert.Equal(t, s, back)
+	// Every profile sets only node fields, of the right types, within range.
+	for _, p := range Profiles() {
+		d := Default()
+		require.True(t, ApplyProfile(&d, p.ID), p.ID)
+		_, err := Parse(d.JSON())
+		assert.NoError(t, err, p.ID)
+		for path := range p.Values {
+			assert.True(t, strings.HasPrefix(path, "node."), "%s sets %s", p.ID, path)
+		}
+		assert.NotEmpty(t, p.Note)
+	}
+	assert.False(t, ApplyProfile(&s, "toaster"))
+}
+
+func TestRadioPayloadForBLE(t *testing.T) {
+	_, err := Parse([]byte(`{"node": {"radio": {"class": "ble", "payload_bytes": 40}}}`))
+	var fe *FieldError
+	require.ErrorAs(t, err, &fe)
+	assert.Equal(t, "node.radio.payload_bytes", fe.Path)
+	_, err = Parse([]byte(`{"node": {"radio": {"class": "lora", "payload_bytes": 40}}}`))
+	assert.NoError(t, err)
 }

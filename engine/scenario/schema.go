@@ -41,19 +41,22 @@ func Schema() []byte {
 
 // objectDocs describes each object of the format.
 var objectDocs = map[string]string{
-	"site":           "Where the node is and what surrounds it.",
-	"site.climate":   "Monthly normals, January first: a built-in preset, or values of your own month by month.",
-	"site.enclosure": "The node's housing, which the sun warms outdoors.",
-	"site.hours":     "When the site is open, on its local clock (lighting and setback follow it).",
-	"site.lighting":  "The site's lights at the node (indoor and fixed placements).",
-	"harvest.panel":  "A small solar panel (harvest.kind \"panel\").",
-	"harvest.indoor": "An indoor-light photovoltaic cell (harvest.kind \"indoor\").",
-	"node":           "The sensor node's own consumption.",
-	"node.vision":    "The always-on camera.",
-	"node.events":    "Detections that wake a host processor and send a message.",
-	"cells":          "The node's battery: identical cells in series × parallel.",
-	"harvest":        "The energy harvester.",
-	"plan":           "The planning horizon.",
+	"site":             "Where the node is and what surrounds it.",
+	"site.climate":     "Monthly normals, January first: a built-in preset, or values of your own month by month.",
+	"site.enclosure":   "The node's housing, which the sun warms outdoors.",
+	"site.hours":       "When the site is open, on its local clock (lighting and setback follow it).",
+	"site.lighting":    "The site's lights at the node (indoor and fixed placements).",
+	"node.illuminator": "The LED that lights dark scenes for the camera.",
+	"node.radio":       "How the node sends a message: one per wake, one per heartbeat.",
+	"node.heartbeat":   "Periodic status messages.",
+	"harvest.panel":    "A small solar panel (harvest.kind \"panel\").",
+	"harvest.indoor":   "An indoor-light photovoltaic cell (harvest.kind \"indoor\").",
+	"node":             "The sensor node's own consumption.",
+	"node.vision":      "The always-on camera.",
+	"node.events":      "Detections that wake a host processor and send a message.",
+	"cells":            "The node's battery: identical cells in series × parallel.",
+	"harvest":          "The energy harvester.",
+	"plan":             "The planning horizon.",
 }
 
 func schemaObject(path, doc string) map[string]any {
@@ -100,6 +103,8 @@ func fieldSchema(f Field) map[string]any {
 		} else {
 			m["maxItems"] = f.MaxLen
 		}
+	case Bool:
+		m["type"] = "boolean"
 	case ChoiceList:
 		m["type"], m["uniqueItems"] = "array", true
 		m["items"] = map[string]any{"type": "string", "enum": f.Enum}

@@ -64,6 +64,8 @@ func (s Scenario) JSON() []byte {
 				b.WriteString(strconv.FormatFloat(y, 'g', -1, 64))
 			}
 			b.WriteString("]")
+		case bool:
+			b.WriteString(strconv.FormatBool(x))
 		case []string:
 			q, _ := json.Marshal(x)
 			b.Write(bytes.ReplaceAll(q, []byte(`","`), []byte(`", "`)))

@@ -39,10 +39,16 @@ func newPackModel(p cell.Pack, peakA, minV float64) *packModel {
 
 // stepEnv is one step's conditions, the same for every cell set.
 type stepEnv struct {
-	tempC      float64
-	tempOK     bool    // inside the cells' rated range
-	usable     float64 // usable fraction of capacity at tempC
-	rOhm       float64 // the pack's internal resistance at tempC
+	tempC  float64
+	tempOK bool    // inside the cells' rated range
+	usable float64 // usable fraction of capacity at tempC
+	rOhm   float64 // the pack's internal resistance at tempC
+	// trappedNew and socPerWhNew are socPct's constants for new cells.
+	trappedNew, socPerWhNew float64
+	// socMin is the state of charge (by energy) below which the pack's
+	// voltage under the node's peak current falls below its minimum: the
+	// voltage check reduced to one comparison (the OCV curve rises with SoC).
+	socMin     float64
 	calFadePer float64 // calendar fade this step (fraction of capacity)
 	dtH        float64
 	loadWh     float64 // the node's load over the step
@@ -68,11 +74,14 @@ type stepResult struct {
 // the surplus; they age; and the voltage under the node's peak current is
 // checked. Outside the rated temperature range the node is down: the cells
 // only self-discharge and the harvest goes unused.
-func (m *packModel) step(c *cellSet, e *stepEnv, part float64) stepResult {
+//
+// It fills *r (a pointer, as the result is large and the loop hot).
+func (m *packModel) step(c *cellSet, e *stepEnv, part float64, r *stepResult) {
 	if !e.tempOK {
 		sd := min(e.sdWh*part, c.storedWh)
 		c.storedWh -= sd
-		return stepResult{sdWh: sd, unusedWh: e.harvestWh * part, limit: LimitTemperature}
+		*r = stepResult{sdWh: sd, unusedWh: e.harvestWh * part, limit: LimitTemperature}
+		return
 	}
 	direct := min(e.harvestWh, e.loadWh) * part
 	surplus := e.harvestWh*part - direct
@@ -86,12 +95,12 @@ func (m *packModel) step(c *cellSet, e *stepEnv, part float64) stepResult {
 		frac = max(avail, 0) / need
 	}
 	c.storedWh -= need * frac
-	r := stepResult{drawnWh: draw * frac, directWh: direct * frac, sdWh: sd * frac, carried: frac}
+	*r = stepResult{drawnWh: draw * frac, directWh: direct * frac, sdWh: sd * frac, carried: frac}
 	r.storedWh, r.lostWh, r.unusedWh = m.chg.charge(c.storedWh, capWh, surplus*frac, e.tempC, e.dtH*part*frac)
 	c.storedWh += r.storedWh
 	if frac < 1 {
 		r.limit = LimitEnergy
-		return r
+		return
 	}
 	if m.fading {
 		// Calendar fade over the step, and cycle fade per equivalent full
@@ -103,27 +112,54 @@ func (m *packModel) step(c *cellSet, e *stepEnv, part float64) stepResult {
 			c.storedWh = capNow
 		}
 	}
-	if m.peakA > 0 && len(m.ocv) > 0 {
-		soc := c.storedWh / (m.ratedWh * c.health)
-		if v := ocvAt(m.ocv, soc)*m.series - m.peakA*e.rOhm; v < m.minV {
-			r.limit = LimitVoltage
-		}
+	if c.storedWh < e.socMin*m.ratedWh*c.health {
+		r.limit = LimitVoltage
 	}
-	return r
 }
 
 // socPct is the state of charge: the energy the cells can still deliver at
 // the step's temperature, as a share of what they deliver when full at it.
-func (m *packModel) socPct(c *cellSet, usable float64) float64 {
+func (m *packModel) socPct(c *cellSet, e *stepEnv) float64 {
+	if c.health == 1 { // new cells (primaries always): no division per step
+		return max(c.storedWh-e.trappedNew, 0) * e.socPerWhNew
+	}
 	capWh := m.ratedWh * c.health
-	return max(c.storedWh-capWh*(1-usable), 0) / (capWh * usable) * 100
+	return max(c.storedWh-capWh*(1-e.usable), 0) / (capWh * e.usable) * 100
 }
 
 // freshHolds reports whether new, full cells would hold the node's minimum
 // voltage under its peak current in the step's conditions: if not, swapping
 // cannot help.
 func (m *packModel) freshHolds(e *stepEnv) bool {
-	return ocvAt(m.ocv, 1)*m.series-m.peakA*e.rOhm >= m.minV
+	return e.socMin <= 1
+}
+
+// socMinAt returns the state of charge below which the pack cannot hold the
+// node's minimum voltage under its peak current through rOhm: the inverse
+// of the OCV curve at (minV + I·R) per cell; 0 when even an empty pack holds
+// it, above 1 when even a full one cannot.
+func (m *packModel) socMinAt(rOhm float64) float64 {
+	if m.peakA <= 0 || len(m.ocv) == 0 {
+		return 0
+	}
+	need := (m.minV + m.peakA*rOhm) / m.series // per cell, open circuit
+	tab := m.ocv
+	switch {
+	case need <= tab[0].V:
+		return 0
+	case need > tab[len(tab)-1].V:
+		return 2
+	}
+	for i := 1; i < len(tab); i++ {
+		if need <= tab[i].V {
+			a, b := tab[i-1], tab[i]
+			if b.V == a.V {
+				return a.SoC
+			}
+			return a.SoC + (b.SoC-a.SoC)*(need-a.V)/(b.V-a.V)
+		}
+	}
+	return 2
 }
 
 // ocvAt interpolates an OCV curve linearly, held at its ends.

@@ -23,19 +23,27 @@ func env(load, harvest float64) *stepEnv {
 	return &stepEnv{tempC: 20, tempOK: true, usable: 1, rOhm: 1, dtH: 1, loadWh: load, harvestWh: harvest}
 }
 
+// stepOf runs one whole step with e's voltage threshold set for m.
+func stepOf(m *packModel, c *cellSet, e *stepEnv) stepResult {
+	e.socMin = m.socMinAt(e.rOhm)
+	var r stepResult
+	m.step(c, e, 1, &r)
+	return r
+}
+
 func TestVoltageLimitUnderPeak(t *testing.T) {
 	// 0.5 A peak through 1 Ω drops 0.5 V: with a 3.2 V minimum the OCV must
 	// stay above 3.7 V — never, so the very first step fails on voltage;
 	// with a 3.0 V minimum the OCV must stay above 3.5 V, i.e. SoC above 5/6.
 	m := newPackModel(testPack(), 0.5, 3.2)
 	c := newCellSet(m.ratedWh)
-	assert.Equal(t, LimitVoltage, m.step(&c, env(0.01, 0), 1).limit)
+	assert.Equal(t, LimitVoltage, stepOf(m, &c, env(0.01, 0)).limit)
 
 	m = newPackModel(testPack(), 0.5, 3.0)
 	c = newCellSet(m.ratedWh)
 	steps := 0
 	for ; steps < 1000; steps++ {
-		if r := m.step(&c, env(0.012, 0), 1); r.limit != "" {
+		if r := stepOf(m, &c, env(0.012, 0)); r.limit != "" {
 			assert.Equal(t, LimitVoltage, r.limit)
 			break
 		}
@@ -50,7 +58,7 @@ func TestTemperatureLimitStopsTheNode(t *testing.T) {
 	c := newCellSet(m.ratedWh)
 	e := env(0.5, 2)
 	e.tempC, e.tempOK, e.sdWh = -30, false, 0.01
-	r := m.step(&c, e, 1)
+	r := stepOf(m, &c, e)
 	assert.Equal(t, LimitTemperature, r.limit)
 	assert.Zero(t, r.drawnWh, "the node is down")
 	assert.Equal(t, 0.01, r.sdWh, "the cells still self-discharge")
@@ -62,7 +70,7 @@ func TestHarvestFeedsTheLoadFirst(t *testing.T) {
 	m := newPackModel(testPack(), 0.001, 2)
 	c := newCellSet(m.ratedWh)
 	c.storedWh = 2
-	r := m.step(&c, env(0.3, 0.5), 1)
+	r := stepOf(m, &c, env(0.3, 0.5))
 	assert.Equal(t, 0.3, r.directWh)
 	assert.Zero(t, r.drawnWh)
 	assert.InDelta(t, 0.2, r.storedWh, 1e-12, "the surplus goes in (efficiency 1)")
@@ -77,7 +85,7 @@ func TestFadeShrinksCapacity(t *testing.T) {
 	e := env(0, 0)
 	e.calFadePer = p.Chem.CalendarFadeAt(20) / HoursPerYear
 	for range 8766 { // a year of hourly steps at 20 °C
-		m.step(&c, e, 1)
+		stepOf(m, &c, e)
 	}
 	assert.InDelta(t, 0.8, c.health, 1e-9, "20 % a year at 20 °C")
 	assert.InDelta(t, 0.8*m.ratedWh, c.storedWh, 1e-9, "the energy above the capacity is lost")
@@ -85,7 +93,7 @@ func TestFadeShrinksCapacity(t *testing.T) {
 	p.Chem.CalendarFadePerYear, p.Chem.CycleFadePerCycle = 0, 0.001
 	m = newPackModel(p, 0.001, 2)
 	c = newCellSet(m.ratedWh)
-	m.step(&c, env(m.ratedWh/2, 0), 1) // half a cycle
+	stepOf(m, &c, env(m.ratedWh/2, 0)) // half a cycle
 	assert.InDelta(t, 1-0.0005, c.health, 1e-12)
 }
 
@@ -93,7 +101,7 @@ func TestFlatWithinAStep(t *testing.T) {
 	m := newPackModel(testPack(), 0.001, 2)
 	c := newCellSet(m.ratedWh)
 	c.storedWh = 0.25
-	r := m.step(&c, env(1, 0), 1)
+	r := stepOf(m, &c, env(1, 0))
 	assert.Equal(t, LimitEnergy, r.limit)
 	assert.InDelta(t, 0.25, r.carried, 1e-12)
 	assert.InDelta(t, 0.25, r.drawnWh, 1e-12)

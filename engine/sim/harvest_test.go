@@ -63,7 +63,7 @@ func TestPolarNightHasNoSun(t *testing.T) {
 		for k := 0; k < y.PerDay; k++ {
 			i := d*y.PerDay + k
 			require.Zero(t, y.HarvestW[i], "December day %d slot %d", d, k)
-			require.Zero(t, y.LuxOutdoor[i])
+			require.Less(t, y.LuxOutdoor[i], 1.0, "no more than deep twilight")
 		}
 	}
 	// …and midnight sun in June: daylight in every slot of the 21st.

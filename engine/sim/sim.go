@@ -32,9 +32,9 @@ type Swap struct {
 type Ledger struct {
 	InstalledWh     float64 // energy of every cell set put in, the first included
 	HarvestedWh     float64
-	HarvestUnusedWh float64 // not stored: primary cells, outside the charge window, above the charge rate, full cells
-	ChargeLossWh    float64 // lost to charge inefficiency
-	LoadWh          load.Breakdown
+	HarvestUnusedWh float64        // not stored: primary cells, outside the charge window, above the charge rate, full cells
+	ChargeLossWh    float64        // lost to charge inefficiency
+	LoadWh          load.Breakdown // the load the cells and harvest carried, by component
 	SelfDischargeWh float64
 	SwappedOutWh    float64 // left in cells taken out at swaps
 	FadeWh          float64 // stored energy lost when fading capacity fell below it
@@ -62,7 +62,7 @@ type Result struct {
 	Start, End time.Time
 	Step       time.Duration
 	Pack       cell.Pack
-	LoadW      load.Breakdown // mean power drawn from the cells, by component
+	LoadW      load.Breakdown // the node's mean power from the cells over the horizon, by component
 	// Flat is when the first cell set, never swapped, can no longer carry
 	// the node, and FlatLimit why (LimitEnergy, LimitVoltage or
 	// LimitTemperature); zero and "" if it outlives the horizon.
@@ -121,10 +121,9 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	pack := PackFor(s)
 	chem := pack.Chem
 	ratedWh := pack.EnergyWh()
-	loadW := load.FromNode(s.Node).CellW()
-	loadTotalW := loadW.Total()
+	lp := LoadParams(s, pack.NominalV())
 	reserve := s.Plan.ReservePct / 100
-	m := newPackModel(pack, s.NodePeakMA()/1000, s.NodeMinInputV(pack.CutoffV()))
+	m := newPackModel(pack, NodePeakMA(s)/1000, s.NodeMinInputV(pack.CutoffV()))
 	// An indoor-light cell sees the site's lights (or daylight outdoors).
 	var indoorCell *harvest.IndoorCell
 	if s.Harvest.Kind == scenario.HarvestIndoor {
@@ -141,21 +140,53 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	if setback {
 		closedC = *s.Site.IndoorClosedTempC
 	}
-	r := Result{Start: start, End: end, Step: step, Pack: pack, LoadW: loadW,
+	r := Result{Start: start, End: end, Step: step, Pack: pack,
 		MinSoCPct: 100, TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
 	r.Ledger.InstalledWh = ratedWh
 	planned, first := newCellSet(ratedWh), newCellSet(ratedWh)
 	firstDone := false
-	var servedH float64 // hours the planned cells carried the node
+	var horizonH float64
+	var demandWh load.Breakdown // the node's load over the horizon, served or not
+	// The load's conditions and its power, recomputed when they change.
+	var lastCond load.Conditions
+	lastCond.Hour = -1
+	var loadW load.Breakdown
+	var loadTotalW float64
+	// Hours at the current load, demanded and served, added into the
+	// totals by component when the load changes.
+	var demandH, servedH float64
+	flush := func() {
+		for k := range loadW {
+			demandWh[k] += loadW[k] * demandH
+			r.Ledger.LoadWh[k] += loadW[k] * servedH
+		}
+		demandH, servedH = 0, 0
+	}
 
+	// Until the plan first swaps, the first cells are the planned cells: one
+	// set is stepped for both. At the first swap the first cells split off
+	// with the planned cells' state and run on their own.
+	firstSplit, justSplit := false, false
+	firstFrom := func(res *stepResult, day time.Time, at, dt time.Duration) {
+		r.Flat = day.Add(at) // voltage and temperature fail from the step's start
+		if res.limit == LimitEnergy {
+			r.Flat = day.Add(at + time.Duration(res.carried*float64(dt)))
+		}
+		r.FlatLimit = res.limit
+		firstDone = true
+	}
 	// swap replaces the planned cells at instant at.
 	swap := func(at time.Time, reason string) {
+		if !firstSplit && !firstDone {
+			first, firstSplit, justSplit = planned, true, true
+		}
 		r.Swaps = append(r.Swaps, Swap{Time: at, Reason: reason})
 		r.Ledger.SwappedOutWh += planned.storedWh
 		r.Ledger.InstalledWh += ratedWh
 		planned = newCellSet(ratedWh)
 	}
-	account := func(res stepResult) {
+	var res, rest, fr stepResult // reused every step
+	account := func(res *stepResult) {
 		r.Ledger.SelfDischargeWh += res.sdWh
 		r.Ledger.ChargeLossWh += res.lostWh
 		r.Ledger.HarvestUnusedWh += res.unusedWh
@@ -189,6 +220,7 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 		into := t.Sub(day)                       // the first step's offset into the day
 		regular := next.Sub(day) == 24*time.Hour // no clock change today
 		weekday := day.Weekday()
+		weekdayMon := (int(weekday) + 6) % 7 // Monday 0
 		steps := int((limit.Sub(t) + step - 1) / step)
 		d := Day{Date: day, SoCMinPct: math.Inf(1), SoCMaxPct: math.Inf(-1),
 			TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
@@ -212,13 +244,31 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			}
 			if T != lastT {
 				lastT = T
-				var sdPerYear float64
-				e.usable, sdPerYear = thermal.At(T)
+				v := thermal.All(T)
+				e.usable = v.Usable
 				e.tempC, e.tempOK = T, T >= chem.OperatingMinC && T <= chem.OperatingMaxC
-				e.rOhm = pack.ResistanceOhm(T)
-				e.sdWh = sdPerYear * ratedWh / HoursPerYear // per hour, scaled below
-				e.calFadePer = chem.CalendarFadeAt(T) / HoursPerYear
+				e.rOhm = pack.ResistanceOhm(20) * v.ResistanceFactor
+				e.socMin = m.socMinAt(e.rOhm)
+				e.trappedNew, e.socPerWhNew = ratedWh*(1-e.usable), 100/(ratedWh*e.usable)
+				e.sdWh = v.SelfDischargeYr * ratedWh / HoursPerYear // per hour, scaled below
+				e.calFadePer = v.CalendarFadeYr / HoursPerYear
 			}
+			// The node's load in this step's conditions.
+			minute := localMinute(day, at, regular, loc)
+			cond := load.Conditions{Weekday: weekdayMon, Hour: minute / 60, Open: open.isOpen(weekday, minute)}
+			if outdoor {
+				cond.Lux = y.LuxOutdoor[idx]
+			} else {
+				cond.Lux = open.lux(s.Site.Lighting, weekday, minute)
+			}
+			if cond != lastCond {
+				flush()
+				lastCond = cond
+				loadW, loadTotalW = lp.CellWTotal(cond)
+			}
+			demandH += dtH
+			horizonH += dtH
+
 			se := e // this step's copy, per-hour rates scaled to dt
 			se.dtH = dtH
 			se.sdWh *= dtH
@@ -231,13 +281,7 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			case y.HarvestW != nil:
 				se.harvestWh = y.HarvestW[idx] * dtH
 			case indoorCell != nil:
-				var lux float64
-				if outdoor {
-					lux = y.LuxOutdoor[idx]
-				} else {
-					lux = open.lux(s.Site.Lighting, weekday, localMinute(day, at, regular, loc))
-				}
-				se.harvestWh = indoorCell.OutputW(lux) * dtH
+				se.harvestWh = indoorCell.OutputW(cond.Lux) * dtH
 			}
 			r.Ledger.HarvestedWh += se.harvestWh
 			d.HarvestWh += se.harvestWh
@@ -246,14 +290,18 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			// The planned cells: swapped when flat within the step (the fresh
 			// set carries the rest of it), when the voltage under the peak
 			// fails (unless they are fresh), or when faded to end of life.
-			res := m.step(&planned, &se, 1)
-			account(res)
+			m.step(&planned, &se, 1, &res)
+			account(&res)
+			justSplit = false
+			if !firstDone && !firstSplit && res.limit != "" {
+				firstFrom(&res, day, at, dt)
+			}
 			served := res.carried
 			switch res.limit {
 			case LimitEnergy:
 				swap(day.Add(at+time.Duration(res.carried*float64(dt))), ReasonFlat)
-				rest := m.step(&planned, &se, 1-res.carried)
-				account(rest)
+				m.step(&planned, &se, 1-res.carried, &rest)
+				account(&rest)
 				served += rest.carried * (1 - res.carried)
 			case LimitVoltage:
 				if m.freshHolds(&se) {
@@ -270,18 +318,13 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			servedH += served * dtH
 
 			// The first cells, left alone until they cannot carry the node.
-			if !firstDone {
-				if fr := m.step(&first, &se, 1); fr.limit != "" {
-					r.Flat = day.Add(at) // voltage and temperature fail from the step's start
-					if fr.limit == LimitEnergy {
-						r.Flat = day.Add(at + time.Duration(fr.carried*float64(dt)))
-					}
-					r.FlatLimit = fr.limit
-					firstDone = true
+			if !firstDone && firstSplit && !justSplit {
+				if m.step(&first, &se, 1, &fr); fr.limit != "" {
+					firstFrom(&fr, day, at, dt)
 				}
 			}
 
-			soc := m.socPct(&planned, e.usable)
+			soc := m.socPct(&planned, &e)
 			d.SoCMinPct = min(d.SoCMinPct, soc)
 			if reserve > 0 && soc <= reserve*100 {
 				swap(day.Add(at+dt), ReasonReserve)
@@ -304,10 +347,9 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 		}
 		day = next
 	}
-	// The node's load, by component, over the hours the cells carried it
-	// (harvest covering part of it directly included).
-	for k := range loadW {
-		r.Ledger.LoadWh[k] = loadW[k] * servedH
+	flush()
+	for k := range demandWh {
+		r.LoadW[k] = demandWh[k] / horizonH
 	}
 	r.Ledger.RemainingWh = planned.storedWh
 	return r

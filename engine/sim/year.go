@@ -155,7 +155,7 @@ func NewYear(s scenario.Scenario, w *weather.Series) (*Year, error) {
 				irr = sky.Erbs(ghi, zen, gon)
 			}
 			y.GHIWm2[i] = irr.GHIWm2
-			y.LuxOutdoor[i] = sky.IlluminanceLx(irr.GHIWm2, sky.DaylightLmPerW)
+			y.LuxOutdoor[i] = max(sky.IlluminanceLx(irr.GHIWm2, sky.DaylightLmPerW), TwilightLux(90-zen))
 			if s.Site.Placement == scenario.Outdoor {
 				y.CellTempC[i] = y.TempC[i] + EnclosureRiseC(irr.GHIWm2, enc.Absorptance, enc.UWm2K)
 			}
@@ -267,4 +267,14 @@ func climateFor(s scenario.Scenario) climate.Model {
 // photovoltaic modules", Progress in Photovoltaics 16 (2008) 307–315.
 func EnclosureRiseC(ghiWm2, absorptance, uWm2K float64) float64 {
 	return absorptance * max(ghiWm2, 0) / uWm2K
+}
+
+// TwilightLux is the outdoor illuminance when the sun is low or just below
+// the horizon, where irradiance models give nothing: about 400 lx at sunset,
+// falling tenfold every 2.5° of depression to about 1.6 lx at −6°, the end
+// of civil twilight (common practice: a few lux at the end of civil
+// twilight, hundreds at sunset; from memory). Above the horizon it is held at
+// 400 lx as a floor under the daylight model.
+func TwilightLux(elevationDeg float64) float64 {
+	return 400 * math.Pow(10, 0.4*min(elevationDeg, 0))
 }
