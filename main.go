@@ -205,6 +205,21 @@ func readInputs(s scenario.Scenario, scenarioPath string, stdin bool) (plan.Inpu
 	return in, nil
 }
 
+// dueText says in words why cells come due.
+func dueText(reason string, reservePct float64) string {
+	switch reason {
+	case "reserve":
+		return fmt.Sprintf("state of charge down to the %g %% reserve", reservePct)
+	case "flat":
+		return "flat"
+	case "voltage":
+		return "too little voltage under the node's peak current"
+	case "fade":
+		return "aged to end of life"
+	}
+	return reason
+}
+
 // summary is the human-readable answer.
 func summary(s scenario.Scenario, r plan.Result) string {
 	var b strings.Builder
@@ -218,7 +233,8 @@ func summary(s scenario.Scenario, r plan.Result) string {
 		row("Lasts", "%s: the cells outlive the %d-year plan", r.Lifetime, s.Plan.Years)
 	}
 	if len(r.Swaps) > 0 {
-		row("First swap", "%s (state of charge down to the %g %% reserve)", r.Swaps[0].Date, s.Plan.ReservePct)
+		sw := r.Swaps[0]
+		row("First swap", "visit on %s; the cells come due on %s (%s)", sw.Date, sw.Due, dueText(sw.Reason, s.Plan.ReservePct))
 		var dates []string
 		for _, sw := range r.Swaps {
 			dates = append(dates, sw.Date)

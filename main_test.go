@@ -55,7 +55,7 @@ func TestPlanSummary(t *testing.T) {
 	r := mustPlan(t, scenario.Demo())
 	assert.Contains(t, out, "Lasts         "+r.Lifetime)
 	assert.Contains(t, out, *r.FirstBrownout)
-	assert.Contains(t, out, "First swap    "+r.Swaps[0].Date)
+	assert.Contains(t, out, "First swap    visit on "+r.Swaps[0].Date+"; the cells come due on "+r.Swaps[0].Due)
 	assert.Contains(t, out, "planning aid")
 }
 

@@ -200,7 +200,7 @@ func TestChartOfTheDemo(t *testing.T) {
 func TestChartSwapOnTheFlatDate(t *testing.T) {
 	// With no reserve the cells are swapped when flat: one label for both.
 	s := scenario.Demo()
-	s.Plan.ReservePct = 0
+	s.Plan.ReservePct, s.Plan.LeadDays, s.Plan.VisitDays = 0, 0, scenario.Weekdays()
 	r := mustPlan(t, s)
 	if len(r.Swaps) == 0 || r.FirstBrownout == nil || r.Swaps[0].Date != *r.FirstBrownout {
 		t.Fatalf("swaps %v, flat %v: the test needs a swap on the flat date", r.Swaps, r.FirstBrownout)

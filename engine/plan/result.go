@@ -51,8 +51,9 @@ type Brownout struct {
 
 // Swap is one planned change of cells.
 type Swap struct {
-	Date   string `json:"date"`
-	Reason string `json:"reason"`
+	Date   string `json:"date"`   // the visit day
+	Due    string `json:"due"`    // when the cells come due; the visit is lead days or more before
+	Reason string `json:"reason"` // why they come due
 }
 
 // Energy is the ledger over the horizon, Wh.
@@ -140,7 +141,7 @@ func FromSim(s scenario.Scenario, r sim.Result) Result {
 		out.PlannedBrownout = &Brownout{Date: r.PlannedBrownout.Format(time.DateOnly), Limit: r.PlannedBrownoutLimit}
 	}
 	for _, sw := range r.Swaps {
-		out.Swaps = append(out.Swaps, Swap{Date: sw.Time.Format(time.DateOnly), Reason: sw.Reason})
+		out.Swaps = append(out.Swaps, Swap{Date: sw.Time.Format(time.DateOnly), Due: sw.Due.Format(time.DateOnly), Reason: sw.Reason})
 	}
 	l := r.Ledger
 	out.EnergyWh = Energy{

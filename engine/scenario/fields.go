@@ -35,9 +35,9 @@ type Field struct {
 	Min, Max float64
 	// Enum lists the allowed values of a Choice.
 	Enum []string
-	// Len is the exact length of a NumberList, or 0 for any length up to
-	// MaxLen.
-	Len, MaxLen int
+	// Len is the exact length of a NumberList, or 0 for any length from
+	// MinLen up to MaxLen (lists of choices too; 0: no bound).
+	Len, MinLen, MaxLen int
 	// Optional fields may be absent or null; they have no default value. A
 	// *float64 field is nil when not given; a float64 one is 0 (its Min is
 	// above 0).
@@ -225,6 +225,12 @@ func Fields() []Field {
 			Doc: "simulation step", ref: func(s *Scenario) any { return &s.Plan.StepMin }},
 		{Path: "plan.reserve_pct", Kind: Number, Unit: "%", Min: 0, Max: 50, Default: 10.0,
 			Doc: "swap the cells when the state of charge falls to this", ref: func(s *Scenario) any { return &s.Plan.ReservePct }},
+		{Path: "plan.lead_days", Kind: Integer, Unit: "d", Min: 0, Max: 365, Default: 0,
+			Doc: "plan each visit this long before the cells come due", ref: func(s *Scenario) any { return &s.Plan.LeadDays }},
+		{Path: "plan.visit_days", Kind: ChoiceList, Enum: Weekdays(), MinLen: 1, Default: []string{"mon", "tue", "wed", "thu", "fri"},
+			Doc: "the days a crew can visit; a visit moves back to the nearest one", ref: func(s *Scenario) any { return &s.Plan.VisitDays }},
+		{Path: "plan.blocked_months", Kind: ChoiceList, Enum: Months(), MaxLen: 11, Default: []string{},
+			Doc: "months with no visits (for example no roof work in deep winter)", ref: func(s *Scenario) any { return &s.Plan.BlockedMonths }},
 	}
 }
 
@@ -287,6 +293,11 @@ func (f Field) setDefault(s *Scenario) {
 	case *bool:
 		*p = f.Default.(bool)
 	}
+}
+
+// Months are the identifiers of the months, January first.
+func Months() []string {
+	return []string{"jan", "feb", "mar", "apr", "may", "jun", "jul", "aug", "sep", "oct", "nov", "dec"}
 }
 
 // Weekdays are the identifiers of the days of the week, Monday first.

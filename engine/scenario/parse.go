@@ -142,6 +142,10 @@ func (p *parser) leaf(f Field, v gjson.Result) {
 			p.fail(f.Path, v, "is not a list", allowedText(f), ErrType)
 			return
 		}
+		if n := len(v.Array()); n < f.MinLen || (f.MaxLen > 0 && n > f.MaxLen) {
+			p.fail(f.Path, v, fmt.Sprintf("has %d values", n), allowedText(f), ErrRange)
+			return
+		}
 		seen := map[string]bool{}
 		out := []string{}
 		for i, item := range v.Array() {
@@ -235,6 +239,7 @@ func checkString(f Field, str string) string {
 
 // crossChecks tests what depends on more than one field.
 func (p *parser) crossChecks() {
+
 	if r := p.s.Node.Radio; r.Class == "ble" && r.PayloadBytes > 31 {
 		p.errs = append(p.errs, &FieldError{Path: "node.radio.payload_bytes", Value: strconv.Itoa(r.PayloadBytes),
 			Problem: "is too long for BLE advertising", Allowed: "0 to 31 bytes of advertising data with node.radio.class ble", Err: ErrRange})
@@ -377,7 +382,14 @@ func allowedText(f Field) string {
 		}
 		return s
 	case ChoiceList:
-		return "a list of distinct values from " + allowedText(Field{Kind: Choice, Enum: f.Enum})
+		s := "a list of distinct values from " + allowedText(Field{Kind: Choice, Enum: f.Enum})
+		if f.MinLen > 0 {
+			s = fmt.Sprintf("a list of at least %d distinct values from %s", f.MinLen, allowedText(Field{Kind: Choice, Enum: f.Enum}))
+		}
+		if f.MaxLen > 0 {
+			s += fmt.Sprintf(", at most %d", f.MaxLen)
+		}
+		return s
 	case Bool:
 		return "true or false"
 	}

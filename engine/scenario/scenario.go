@@ -293,12 +293,17 @@ func abs(x float64) float64 {
 	return x
 }
 
-// Plan is the planning horizon.
+// Plan is the planning horizon and the swap rules.
 type Plan struct {
 	Start      string // ISO 8601 calendar date, local to the site
 	Years      int
 	StepMin    int
 	ReservePct float64 // swap when the state of charge falls to this
+	// LeadDays is how long before the cells come due the visit is planned;
+	// the visit then moves back to the nearest allowed day.
+	LeadDays      int
+	VisitDays     []string // "mon" … "sun"
+	BlockedMonths []string // "jan" … "dec": no visits (roof work in deep winter)
 }
 
 // Location returns the site's time zone. It panics on a zone that Parse would

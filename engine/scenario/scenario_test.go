@@ -285,8 +285,20 @@ func checkArray(t *testing.T, prop map[string]any, accept func(string), reject f
 	items := prop["items"].(map[string]any)
 	reject(`"1"`, ErrType)
 	if enum, ok := items["enum"].([]any); ok {
-		accept("[]")
-		accept(mustJSON(enum))
+		lo, hasMin := prop["minItems"].(float64)
+		hi, hasMax := prop["maxItems"].(float64)
+		if hasMin {
+			reject(mustJSON(enum[:int(lo)-1]), ErrRange)
+			accept(mustJSON(enum[:int(lo)]))
+		} else {
+			accept("[]")
+		}
+		if hasMax {
+			reject(mustJSON(enum[:int(hi)+1]), ErrRange)
+			accept(mustJSON(enum[:int(hi)]))
+		} else {
+			accept(mustJSON(enum))
+		}
 		reject(mustJSON([]any{enum[0], enum[0]}), ErrRange) // uniqueItems
 		reject(`["someday"]`, ErrRange)
 		reject(`[1]`, ErrType)

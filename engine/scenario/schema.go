@@ -108,6 +108,12 @@ func fieldSchema(f Field) map[string]any {
 	case ChoiceList:
 		m["type"], m["uniqueItems"] = "array", true
 		m["items"] = map[string]any{"type": "string", "enum": f.Enum}
+		if f.MinLen > 0 {
+			m["minItems"] = f.MinLen
+		}
+		if f.MaxLen > 0 {
+			m["maxItems"] = f.MaxLen
+		}
 	}
 	if !f.Optional {
 		m["default"] = f.Default

@@ -49,3 +49,34 @@ func (o openHours) lux(l scenario.Lighting, wd time.Weekday, m int) float64 {
 	}
 	return l.ClosedLux
 }
+
+// visitRule says on which local days cells may be swapped.
+type visitRule struct {
+	days    [7]bool  // by time.Weekday
+	blocked [13]bool // by time.Month
+}
+
+func newVisitRule(p scenario.Plan) visitRule {
+	var v visitRule
+	ids := scenario.Weekdays() // Monday first
+	for _, d := range p.VisitDays {
+		for i, id := range ids {
+			if d == id {
+				v.days[(i+1)%7] = true
+			}
+		}
+	}
+	for _, m := range p.BlockedMonths {
+		for i, id := range scenario.Months() {
+			if m == id {
+				v.blocked[i+1] = true
+			}
+		}
+	}
+	return v
+}
+
+// allowed reports whether a visit may happen on the local date of day.
+func (v visitRule) allowed(day time.Time) bool {
+	return v.days[day.Weekday()] && !v.blocked[day.Month()]
+}

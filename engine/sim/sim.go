@@ -24,7 +24,8 @@ const (
 
 // Swap is one change of cells.
 type Swap struct {
-	Time   time.Time
+	Time   time.Time // the start of the visit day
+	Due    time.Time // when the cells came due (Reason); Time is lead days or more before
 	Reason string
 }
 
@@ -115,6 +116,40 @@ func Run(s scenario.Scenario) Result {
 // must come from NewYear of a scenario with the same site, harvester and
 // step.
 func RunWith(s scenario.Scenario, y *Year) Result {
+	return RunOpts(s, y, Options{})
+}
+
+// Options adjust a run.
+type Options struct {
+	// DayFactor, when set, scales the harvest and the daylight of each
+	// local day of the horizon (index 0 is the plan's first day): a drawn
+	// weather year's daily clearness over the monthly mean.
+	DayFactor []float64
+}
+
+// state is everything a run changes, so a day's start can be kept and
+// returned to when a swap must move back to an earlier visit day.
+type state struct {
+	planned, first        cellSet
+	firstDone, firstSplit bool
+	flat                  time.Time
+	flatLimit             string
+	ledger                Ledger
+	demandWh              load.Breakdown
+	horizonH              float64
+	days, swaps           int
+	minSoC, tMin, tMax    float64
+	brownoutH             float64
+	brownoutAt            time.Time
+	brownoutLimit         string
+	t, utcDay             time.Time
+	utcMin                int
+	lastSwapDay           int // day index of the last swap, −1 before any
+}
+
+// RunOpts simulates the scenario with a prepared environment table and
+// options.
+func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 	start, end := s.StartTime(), s.EndTime()
 	step := time.Duration(s.Plan.StepMin) * time.Minute
 	stepH := step.Hours()
@@ -124,6 +159,8 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	lp := LoadParams(s, pack.NominalV())
 	reserve := s.Plan.ReservePct / 100
 	m := newPackModel(pack, NodePeakMA(s)/1000, s.NodeMinInputV(pack.CutoffV()))
+	visits := newVisitRule(s.Plan)
+	lead := s.Plan.LeadDays
 	// An indoor-light cell sees the site's lights (or daylight outdoors).
 	var indoorCell *harvest.IndoorCell
 	if s.Harvest.Kind == scenario.HarvestIndoor {
@@ -140,16 +177,26 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	if setback {
 		closedC = *s.Site.IndoorClosedTempC
 	}
-	r := Result{Start: start, End: end, Step: step, Pack: pack,
-		MinSoCPct: 100, TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
-	r.Ledger.InstalledWh = ratedWh
-	planned, first := newCellSet(ratedWh), newCellSet(ratedWh)
-	firstDone := false
-	var horizonH float64
-	var demandWh load.Breakdown // the node's load over the horizon, served or not
+
+	// The horizon's local days.
+	var dayStarts []time.Time
+	for d := start; d.Before(end); d = d.AddDate(0, 0, 1) {
+		dayStarts = append(dayStarts, d)
+	}
+	dayStarts = append(dayStarts, end)
+	nDays := len(dayStarts) - 1
+
+	r := Result{Start: start, End: end, Step: step, Pack: pack}
+	st := state{planned: newCellSet(ratedWh), first: newCellSet(ratedWh),
+		minSoC: 100, tMin: math.Inf(1), tMax: math.Inf(-1), lastSwapDay: -1}
+	st.ledger.InstalledWh = ratedWh
+	st.t = start
+	st.utcDay = start.UTC().Truncate(24 * time.Hour)
+	st.utcMin = int(start.UTC().Sub(st.utcDay) / time.Minute)
+	snaps := make([]state, nDays)
+
 	// The load's conditions and its power, recomputed when they change.
 	var lastCond load.Conditions
-	lastCond.Hour = -1
 	var loadW load.Breakdown
 	var loadTotalW float64
 	// Hours at the current load, demanded and served, added into the
@@ -157,86 +204,100 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 	var demandH, servedH float64
 	flush := func() {
 		for k := range loadW {
-			demandWh[k] += loadW[k] * demandH
-			r.Ledger.LoadWh[k] += loadW[k] * servedH
+			st.demandWh[k] += loadW[k] * demandH
+			st.ledger.LoadWh[k] += loadW[k] * servedH
 		}
 		demandH, servedH = 0, 0
 	}
+	// Temperature-dependent values, recomputed only when the temperature moves.
+	thermal := cell.NewThermal(chem)
+	var lastT float64
+	var e stepEnv
+	forget := func() { lastT, lastCond = math.NaN(), load.Conditions{Hour: -1} }
+	forget()
 
 	// Until the plan first swaps, the first cells are the planned cells: one
 	// set is stepped for both. At the first swap the first cells split off
 	// with the planned cells' state and run on their own.
-	firstSplit, justSplit := false, false
+	justSplit := false
 	firstFrom := func(res *stepResult, day time.Time, at, dt time.Duration) {
-		r.Flat = day.Add(at) // voltage and temperature fail from the step's start
+		st.flat = day.Add(at) // voltage and temperature fail from the step's start
 		if res.limit == LimitEnergy {
-			r.Flat = day.Add(at + time.Duration(res.carried*float64(dt)))
+			st.flat = day.Add(at + time.Duration(res.carried*float64(dt)))
 		}
-		r.FlatLimit = res.limit
-		firstDone = true
+		st.flatLimit = res.limit
+		st.firstDone = true
 	}
 	// swap replaces the planned cells at instant at.
-	swap := func(at time.Time, reason string) {
-		if !firstSplit && !firstDone {
-			first, firstSplit, justSplit = planned, true, true
+	swap := func(at, due time.Time, reason string, dayIdx int) {
+		if !st.firstSplit && !st.firstDone {
+			st.first, st.firstSplit, justSplit = st.planned, true, true
 		}
-		r.Swaps = append(r.Swaps, Swap{Time: at, Reason: reason})
-		r.Ledger.SwappedOutWh += planned.storedWh
-		r.Ledger.InstalledWh += ratedWh
-		planned = newCellSet(ratedWh)
+		r.Swaps = append(r.Swaps[:st.swaps], Swap{Time: at, Due: due, Reason: reason})
+		st.swaps++
+		st.ledger.SwappedOutWh += st.planned.storedWh
+		st.ledger.InstalledWh += ratedWh
+		st.planned = newCellSet(ratedWh)
+		st.lastSwapDay = dayIdx
 	}
 	var res, rest, fr stepResult // reused every step
 	account := func(res *stepResult) {
-		r.Ledger.SelfDischargeWh += res.sdWh
-		r.Ledger.ChargeLossWh += res.lostWh
-		r.Ledger.HarvestUnusedWh += res.unusedWh
-		r.Ledger.FadeWh += res.fadeWh
+		st.ledger.SelfDischargeWh += res.sdWh
+		st.ledger.ChargeLossWh += res.lostWh
+		st.ledger.HarvestUnusedWh += res.unusedWh
+		st.ledger.FadeWh += res.fadeWh
 	}
 	brownout := func(at time.Time, h float64, limit string) {
-		if r.PlannedBrownout.IsZero() {
-			r.PlannedBrownout, r.PlannedBrownoutLimit = at, limit
+		if st.brownoutAt.IsZero() {
+			st.brownoutAt, st.brownoutLimit = at, limit
 		}
-		r.BrownoutH += h
+		st.brownoutH += h
+	}
+	// visitFor returns the day on which to swap cells that are due at due:
+	// the latest allowed visit day at least the lead time before, after the
+	// last swap; −1 when there is none (then the swap happens when due).
+	visitFor := func(due time.Time, dueDay int) int {
+		latest := due.AddDate(0, 0, -lead)
+		for di := dueDay; di > st.lastSwapDay && di >= 0; di-- {
+			if !dayStarts[di].After(latest) && visits.allowed(dayStarts[di]) {
+				return di
+			}
+		}
+		return -1
 	}
 
-	// Temperature-dependent values, recomputed only when the temperature moves.
-	thermal := cell.NewThermal(chem)
-	lastT := math.NaN()
-	var e stepEnv
-
-	// The environment table is indexed by UTC day and minute of the day.
-	utcDay := start.UTC().Truncate(24 * time.Hour)
-	utcMin := int(start.UTC().Sub(utcDay) / time.Minute)
-	rowBase := row(utcDay.Month(), utcDay.Day()) * y.PerDay
 	stepMin := s.Plan.StepMin
-
-	t := start // start of the next step
-	for day := start; day.Before(end); {
-		next := day.AddDate(0, 0, 1)
-		limit := next
-		if end.Before(limit) {
-			limit = end
+	for di := 0; di < nDays; di++ {
+		day, next := dayStarts[di], dayStarts[di+1]
+		flush()
+		snaps[di] = st
+		factor := 1.0
+		if o.DayFactor != nil && di < len(o.DayFactor) {
+			factor = o.DayFactor[di]
 		}
-		into := t.Sub(day)                       // the first step's offset into the day
+		rowBase := row(st.utcDay.Month(), st.utcDay.Day()) * y.PerDay
+		into := st.t.Sub(day)                    // the first step's offset into the day
 		regular := next.Sub(day) == 24*time.Hour // no clock change today
 		weekday := day.Weekday()
 		weekdayMon := (int(weekday) + 6) % 7 // Monday 0
-		steps := int((limit.Sub(t) + step - 1) / step)
+		steps := int((next.Sub(st.t) + step - 1) / step)
 		d := Day{Date: day, SoCMinPct: math.Inf(1), SoCMaxPct: math.Inf(-1),
 			TempMinC: math.Inf(1), TempMaxC: math.Inf(-1)}
 		var socSum, tempSum float64
 		toEnd := end.Sub(day)
+		rewind, rewindReason := -1, ""
+		var rewindDue time.Time
 		for k := range steps {
 			at := into + time.Duration(k)*step // step start, from local midnight
 			dt, dtH := step, stepH
 			if rest := toEnd - at; rest < dt {
 				dt, dtH = rest, rest.Hours() // the horizon's last step
 			}
-			idx := rowBase + utcMin/y.ResMin
-			if utcMin += stepMin; utcMin >= 1440 {
-				utcMin -= 1440
-				utcDay = utcDay.AddDate(0, 0, 1)
-				rowBase = row(utcDay.Month(), utcDay.Day()) * y.PerDay
+			idx := rowBase + st.utcMin/y.ResMin
+			if st.utcMin += stepMin; st.utcMin >= 1440 {
+				st.utcMin -= 1440
+				st.utcDay = st.utcDay.AddDate(0, 0, 1)
+				rowBase = row(st.utcDay.Month(), st.utcDay.Day()) * y.PerDay
 			}
 			T := y.CellTempC[idx]
 			if setback && !open.isOpen(weekday, localMinute(day, at, regular, loc)) {
@@ -258,6 +319,9 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			cond := load.Conditions{Weekday: weekdayMon, Hour: minute / 60, Open: open.isOpen(weekday, minute)}
 			if outdoor {
 				cond.Lux = y.LuxOutdoor[idx]
+				if factor != 1 && cond.Lux > twilightFloorLux {
+					cond.Lux = max(cond.Lux*factor, twilightFloorLux) // daylight scales, twilight does not
+				}
 			} else {
 				cond.Lux = open.lux(s.Site.Lighting, weekday, minute)
 			}
@@ -267,7 +331,7 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 				loadW, loadTotalW = lp.CellWTotal(cond)
 			}
 			demandH += dtH
-			horizonH += dtH
+			st.horizonH += dtH
 
 			se := e // this step's copy, per-hour rates scaled to dt
 			se.dtH = dtH
@@ -279,79 +343,106 @@ func RunWith(s scenario.Scenario, y *Year) Result {
 			// from the lights (or daylight outdoors).
 			switch {
 			case y.HarvestW != nil:
-				se.harvestWh = y.HarvestW[idx] * dtH
+				se.harvestWh = y.HarvestW[idx] * dtH * factor
 			case indoorCell != nil:
 				se.harvestWh = indoorCell.OutputW(cond.Lux) * dtH
 			}
-			r.Ledger.HarvestedWh += se.harvestWh
+			st.ledger.HarvestedWh += se.harvestWh
 			d.HarvestWh += se.harvestWh
 			d.LoadWh += se.loadWh
 
-			// The planned cells: swapped when flat within the step (the fresh
-			// set carries the rest of it), when the voltage under the peak
-			// fails (unless they are fresh), or when faded to end of life.
-			m.step(&planned, &se, 1, &res)
+			// The planned cells. When they come due (flat within the step,
+			// the voltage under the peak failing where fresh cells would
+			// hold it, faded to end of life, or at the reserve), the swap
+			// moves back to a visit day: the run returns to that day's start.
+			m.step(&st.planned, &se, 1, &res)
 			account(&res)
 			justSplit = false
-			if !firstDone && !firstSplit && res.limit != "" {
+			if !st.firstDone && !st.firstSplit && res.limit != "" {
 				firstFrom(&res, day, at, dt)
 			}
 			served := res.carried
+			due, reason := time.Time{}, ""
 			switch res.limit {
 			case LimitEnergy:
-				swap(day.Add(at+time.Duration(res.carried*float64(dt))), ReasonFlat)
-				m.step(&planned, &se, 1-res.carried, &rest)
-				account(&rest)
-				served += rest.carried * (1 - res.carried)
+				due, reason = day.Add(at+time.Duration(res.carried*float64(dt))), ReasonFlat
 			case LimitVoltage:
 				if m.freshHolds(&se) {
-					swap(day.Add(at+dt), ReasonVoltage)
+					due, reason = day.Add(at+dt), ReasonVoltage
 				} else {
 					brownout(day.Add(at), dtH, LimitVoltage)
 				}
 			case LimitTemperature:
 				brownout(day.Add(at), dtH, LimitTemperature)
 			}
-			if m.fading && planned.health <= chem.EndOfLife {
-				swap(day.Add(at+dt), ReasonFade)
+			if reason == "" && m.fading && st.planned.health <= chem.EndOfLife {
+				due, reason = day.Add(at+dt), ReasonFade
+			}
+			soc := m.socPct(&st.planned, &e)
+			if reason == "" && reserve > 0 && soc <= reserve*100 {
+				due, reason = day.Add(at+dt), ReasonReserve
+			}
+			if reason != "" {
+				if vd := visitFor(due, di); vd >= 0 {
+					rewind, rewindReason, rewindDue = vd, reason, due
+					break
+				}
+				// No visit day can come first: swap when due.
+				swap(due, due, reason, di)
+				if res.limit == LimitEnergy {
+					m.step(&st.planned, &se, 1-res.carried, &rest)
+					account(&rest)
+					served += rest.carried * (1 - res.carried)
+				}
+				soc = m.socPct(&st.planned, &e)
 			}
 			servedH += served * dtH
 
 			// The first cells, left alone until they cannot carry the node.
-			if !firstDone && firstSplit && !justSplit {
-				if m.step(&first, &se, 1, &fr); fr.limit != "" {
+			if !st.firstDone && st.firstSplit && !justSplit {
+				if m.step(&st.first, &se, 1, &fr); fr.limit != "" {
 					firstFrom(&fr, day, at, dt)
 				}
 			}
 
-			soc := m.socPct(&planned, &e)
 			d.SoCMinPct = min(d.SoCMinPct, soc)
-			if reserve > 0 && soc <= reserve*100 {
-				swap(day.Add(at+dt), ReasonReserve)
-				soc = 100
-			}
 			d.SoCMaxPct = max(d.SoCMaxPct, soc)
 			socSum += soc
 			d.TempMinC = min(d.TempMinC, T)
 			d.TempMaxC = max(d.TempMaxC, T)
 			tempSum += T
 		}
-		t = t.Add(time.Duration(steps) * step)
+		if rewind >= 0 {
+			// Back to the start of the visit day, and swap there.
+			flush()
+			st = snaps[rewind]
+			r.Days = r.Days[:st.days]
+			forget()
+			swap(dayStarts[rewind], rewindDue, rewindReason, rewind)
+			di = rewind - 1
+			continue
+		}
+		st.t = st.t.Add(time.Duration(steps) * step)
 		if steps > 0 {
 			d.SoCMeanPct = socSum / float64(steps)
 			d.TempMeanC = tempSum / float64(steps)
-			r.MinSoCPct = min(r.MinSoCPct, d.SoCMinPct)
-			r.TempMinC = min(r.TempMinC, d.TempMinC)
-			r.TempMaxC = max(r.TempMaxC, d.TempMaxC)
-			r.Days = append(r.Days, d)
+			st.minSoC = min(st.minSoC, d.SoCMinPct)
+			st.tMin = min(st.tMin, d.TempMinC)
+			st.tMax = max(st.tMax, d.TempMaxC)
+			r.Days = append(r.Days[:st.days], d)
+			st.days++
 		}
-		day = next
 	}
 	flush()
-	for k := range demandWh {
-		r.LoadW[k] = demandWh[k] / horizonH
+	r.Swaps = r.Swaps[:st.swaps]
+	r.Ledger = st.ledger
+	for k := range st.demandWh {
+		r.LoadW[k] = st.demandWh[k] / st.horizonH
 	}
-	r.Ledger.RemainingWh = planned.storedWh
+	r.Ledger.RemainingWh = st.planned.storedWh
+	r.Flat, r.FlatLimit = st.flat, st.flatLimit
+	r.MinSoCPct, r.TempMinC, r.TempMaxC = st.minSoC, st.tMin, st.tMax
+	r.BrownoutH, r.PlannedBrownout, r.PlannedBrownoutLimit = st.brownoutH, st.brownoutAt, st.brownoutLimit
 	return r
 }
 

@@ -131,25 +131,72 @@ func TestSwapsAtReserve(t *testing.T) {
 	s.Plan.Years = 10
 	s.Plan.ReservePct = 15
 	s.Plan.StepMin = 10
+	s.Plan.VisitDays = scenario.Weekdays() // any day
 	r := Run(s)
 	// At a fixed temperature each cell set lasts (1 − reserve) of its usable
-	// life before it is swapped.
+	// life before it comes due; it is swapped at the start of that day.
 	chem, _ := cell.Lookup("li-socl2")
 	ratedWh := 2.6 * 3.5
 	loadW := r.LoadW.Total()
 	sdW := chem.SelfDischargePerYear * ratedWh / HoursPerYear
 	period := time.Duration((1 - 0.15) * ratedWh / (loadW + sdW) * float64(time.Hour))
-	want := int(r.End.Sub(r.Start) / period)
-	require.Len(t, r.Swaps, want)
+	installed := r.Start
 	for i, sw := range r.Swaps {
+		due := installed.Add(period)
 		assert.Equal(t, ReasonReserve, sw.Reason)
-		// Each swap is within one step (per swap so far) of the closed form.
-		wantAt := r.Start.Add(time.Duration(i+1) * period)
-		assert.LessOrEqualf(t, math.Abs(sw.Time.Sub(wantAt).Minutes()), float64((i+1)*s.Plan.StepMin),
-			"swap %d at %v, want %v", i, sw.Time, wantAt)
+		// Due within one step of the closed form…
+		assert.LessOrEqualf(t, math.Abs(sw.Due.Sub(due).Minutes()), float64(s.Plan.StepMin), "swap %d due %v, want %v", i, sw.Due, due)
+		// …and made at the start of that local day.
+		y, m, d := sw.Due.Date()
+		assert.Equal(t, time.Date(y, m, d, 0, 0, 0, 0, sw.Due.Location()), sw.Time, "swap %d", i)
+		installed = sw.Time
 	}
-	// The planned cells never fall below the reserve by more than one step's draw.
-	assert.InDelta(t, 15, r.MinSoCPct, 0.01)
+	assert.GreaterOrEqual(t, len(r.Swaps), int(r.End.Sub(r.Start)/period), "at least one swap a period")
+	assert.InDelta(t, 0, r.Ledger.Imbalance(), 1e-9)
+}
+
+// TestSwapDatesWithLeadTimeOnWeekdays: exact dates, worked out here from the
+// closed form. Cells come due a period after they are installed; the visit is
+// planned 14 days before that and moved back to a weekday; the new cells go
+// in at the start of the visit day.
+func TestSwapDatesWithLeadTimeOnWeekdays(t *testing.T) {
+	s := fixedScenario("li-socl2", "AA", 20)
+	s.Site.Timezone = "UTC"
+	s.Plan.Start, s.Plan.Years, s.Plan.ReservePct, s.Plan.StepMin = "2027-01-01", 6, 10, 10
+	s.Plan.LeadDays = 14
+	s.Plan.VisitDays = []string{"mon", "tue", "wed", "thu", "fri"}
+	s.Plan.BlockedMonths = []string{"dec", "jan", "feb"}
+	r := Run(s)
+	chem, _ := cell.Lookup("li-socl2")
+	ratedWh := 2.6 * 3.5
+	sdW := chem.SelfDischargePerYear * ratedWh / HoursPerYear
+	period := time.Duration((1 - 0.10) * ratedWh / (r.LoadW.Total() + sdW) * float64(time.Hour))
+	var want []string
+	installed := r.Start
+	for {
+		due := installed.Add(period)
+		if !due.Before(r.End) {
+			break
+		}
+		day := time.Date(due.Year(), due.Month(), due.Day(), 0, 0, 0, 0, time.UTC).AddDate(0, 0, -14)
+		for day.Weekday() == time.Saturday || day.Weekday() == time.Sunday ||
+			day.Month() == time.December || day.Month() == time.January || day.Month() == time.February {
+			day = day.AddDate(0, 0, -1)
+		}
+		want = append(want, day.Format(time.DateOnly))
+		installed = day
+	}
+	var got []string
+	for _, sw := range r.Swaps {
+		got = append(got, sw.Time.Format(time.DateOnly))
+		wd := sw.Time.Weekday()
+		assert.True(t, wd != time.Saturday && wd != time.Sunday, "%v is a weekday", sw.Time)
+		assert.GreaterOrEqual(t, sw.Due.Sub(sw.Time), 14*24*time.Hour, "planned at least the lead time ahead")
+	}
+	require.NotEmpty(t, want)
+	assert.Equal(t, want, got)
+	assert.InDelta(t, 0, r.Ledger.Imbalance(), 1e-9)
+	assert.Zero(t, r.BrownoutH)
 }
 
 func TestDaysFollowTheLocalCalendar(t *testing.T) {

@@ -276,5 +276,8 @@ func EnclosureRiseC(ghiWm2, absorptance, uWm2K float64) float64 {
 // twilight, hundreds at sunset; from memory). Above the horizon it is held at
 // 400 lx as a floor under the daylight model.
 func TwilightLux(elevationDeg float64) float64 {
-	return 400 * math.Pow(10, 0.4*min(elevationDeg, 0))
+	return twilightFloorLux * math.Pow(10, 0.4*min(elevationDeg, 0))
 }
+
+// twilightFloorLux is the illuminance at sunset, the floor under daylight.
+const twilightFloorLux = 400
