@@ -4,6 +4,7 @@
 //	nodelife plan [--json] SCENARIO.json   plan one node ("-" reads standard input)
 //	nodelife cells [--json]                the cell library with its sources
 //	nodelife presets [--json]              node profiles, occupancy patterns, climate presets
+//	nodelife compare [--json] A.json B.json [C.json D.json]  options side by side
 //	nodelife demo                          print the built-in demo scenario
 //	nodelife schema                        print the scenario format's JSON Schema
 //	nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
@@ -15,6 +16,7 @@
 package main
 
 import (
+	"context"
 	"encoding/json"
 	"errors"
 	"flag"
@@ -52,9 +54,15 @@ func main() {
 const usage = `nodelife plans battery life and cell swaps for always-on camera sensor nodes.
 
 usage:
-  nodelife plan [--json] SCENARIO.json   plan one node ("-" reads standard input)
+  nodelife plan [--json] [--fast] SCENARIO.json
+                                         plan one node with advice ("-" reads standard input;
+                                         --fast: the answer without the advice)
   nodelife cells [--json]                the cell library with its sources
   nodelife presets [--json]              node profiles, occupancy patterns, climate presets
+  nodelife compare [--json] A.json B.json [C.json D.json]
+                                         two to four options side by side, with their cost
+  nodelife chart [--svg|--csv] SCENARIO.json
+                                         the state-of-charge chart as SVG, or the daily rows as CSV
   nodelife demo                          print the built-in demo scenario
   nodelife schema                        print the scenario format's JSON Schema
   nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
@@ -77,6 +85,10 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		err = cmdCells(args[1:], stdout)
 	case "presets":
 		err = cmdPresets(args[1:], stdout)
+	case "compare":
+		err = cmdCompare(args[1:], stdout)
+	case "chart":
+		err = cmdChart(args[1:], stdin, stdout)
 	case "demo":
 		_, err = stdout.Write(scenario.DemoJSON())
 	case "schema":
@@ -118,6 +130,7 @@ func parseFlags(fs *flag.FlagSet, args []string) error {
 func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
 	fs := newFlags("plan")
 	asJSON := fs.Bool("json", false, "print the result as JSON")
+	fast := fs.Bool("fast", false, "skip the advice (weather draws, sizing, levers)")
 	// Accept the flag after the file name too: nodelife plan FILE --json.
 	var files []string
 	for len(args) > 0 {
@@ -152,7 +165,12 @@ func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
 	if err != nil {
 		return err
 	}
-	r, err := plan.RunWith(s, in)
+	var r plan.Result
+	if *fast {
+		r, err = plan.RunWith(s, in)
+	} else {
+		r, err = plan.Plan(context.Background(), s, in, plan.AdviceOptions{})
+	}
 	if err != nil {
 		return usageError{prefixLines(name, err)}
 	}
@@ -267,6 +285,12 @@ func summary(s scenario.Scenario, r plan.Result) string {
 	e := r.EnergyWh
 	row("Energy, Wh", "installed %.1f, load %.1f, self-discharge %.1f, swapped out %.1f, remaining %.1f",
 		e.Installed, e.Load, e.SelfDischarge, e.SwappedOut, e.Remaining)
+	if r.Advice != nil && len(r.Advice.Sentences) > 0 {
+		b.WriteString("Advice\n")
+		for _, line := range r.Advice.Sentences {
+			fmt.Fprintf(&b, "  - %s\n", line)
+		}
+	}
 	if len(r.Cautions) > 0 {
 		b.WriteString("Cautions\n")
 		for _, c := range r.Cautions {

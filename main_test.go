@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"context"
 	"encoding/json"
 	"os"
 	"path/filepath"
@@ -38,7 +39,9 @@ func TestPlanJSONMatchesEngine(t *testing.T) {
 		require.Equal(t, 0, code, errOut)
 		var got, want any
 		require.NoError(t, json.Unmarshal([]byte(out), &got))
-		b, _ := json.Marshal(mustPlan(t, scenario.Demo()))
+		full, err := plan.Plan(context.Background(), scenario.Demo(), plan.Inputs{}, plan.AdviceOptions{})
+		require.NoError(t, err)
+		b, _ := json.Marshal(full)
 		require.NoError(t, json.Unmarshal(b, &want))
 		assert.Equal(t, want, got)
 	}
@@ -131,12 +134,26 @@ func TestREADMEDocumentsTheFormats(t *testing.T) {
 	for _, f := range scenario.Fields() {
 		assert.True(t, strings.Contains(text, "| `"+f.Path+"` |"), "README lacks scenario field %s", f.Path)
 	}
-	b, err := json.Marshal(mustPlan(t, scenario.Demo()))
+	// A scenario with a panel, so that every advice key is there.
+	s := scenario.Demo()
+	s.Site.Placement, s.Harvest.Kind, s.Cells.Chemistry, s.Cells.Form = scenario.Outdoor, scenario.HarvestPanel, "li-ion", "14500"
+	s.Plan.Years, s.Plan.WeatherYears = 2, 3
+	full, err := plan.Plan(context.Background(), s, plan.Inputs{}, plan.AdviceOptions{})
+	require.NoError(t, err)
+	b, err := json.Marshal(full)
 	require.NoError(t, err)
 	var m map[string]any
 	require.NoError(t, json.Unmarshal(b, &m))
 	for k := range m {
 		assert.True(t, strings.Contains(text, "`"+k+"`"), "README lacks result key %s", k)
+	}
+	for k, v := range m["advice"].(map[string]any) {
+		assert.True(t, strings.Contains(text, "`"+k+"`"), "README lacks advice key %s", k)
+		if obj, ok := v.(map[string]any); ok {
+			for k2 := range obj {
+				assert.True(t, strings.Contains(text, "`"+k2+"`"), "README lacks advice key %s.%s", k, k2)
+			}
+		}
 	}
 	for k := range m["energy_wh"].(map[string]any) {
 		assert.True(t, strings.Contains(text, "`"+k+"`"), "README lacks energy_wh key %s", k)

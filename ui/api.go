@@ -1,21 +1,22 @@
 package ui
 
 import (
+	"context"
 	"encoding/json"
 
 	"nodelife/engine/plan"
 	"nodelife/engine/scenario"
 )
 
-// Run plans a scenario file and returns the result as JSON: the same value
-// `nodelife plan --json` prints for the file. A bad file returns the
+// Run plans a scenario file with its advice and returns the result as JSON:
+// the same value `nodelife plan --json` prints for the file. A bad file returns the
 // engine's error, whose text is what the command line prints.
 func Run(data []byte) ([]byte, error) {
 	s, err := scenario.Parse(data)
 	if err != nil {
 		return nil, err
 	}
-	r, err := plan.Run(s)
+	r, err := plan.Plan(context.Background(), s, plan.Inputs{}, plan.AdviceOptions{})
 	if err != nil {
 		return nil, err
 	}

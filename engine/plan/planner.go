@@ -20,17 +20,25 @@ type Planner struct {
 
 // Run plans s, as RunWith(s, p.Inputs) would.
 func (p *Planner) Run(s scenario.Scenario) (Result, error) {
-	key := yearKey(s)
-	if p.year == nil || key != p.key {
-		y, err := sim.NewYear(s, p.Inputs.Weather)
-		if err != nil {
-			return Result{}, err
-		}
-		p.year, p.key = y, key
+	if err := p.ensureYear(s); err != nil {
+		return Result{}, err
 	}
 	r := FromSim(s, sim.RunWith(s, p.year))
 	r.Cautions = append(r.Cautions, inputCautions(s, p.Inputs)...)
 	return r, nil
+}
+
+// ensureYear builds the site's table for s unless the cached one fits.
+func (p *Planner) ensureYear(s scenario.Scenario) error {
+	key := yearKey(s)
+	if p.year == nil || key != p.key {
+		y, err := sim.NewYear(s, p.Inputs.Weather)
+		if err != nil {
+			return err
+		}
+		p.year, p.key = y, key
+	}
+	return nil
 }
 
 // SetInputs replaces the input files and forgets the cached table.

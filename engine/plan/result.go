@@ -1,6 +1,7 @@
 package plan
 
 import (
+	"context"
 	"fmt"
 	"math"
 	"time"
@@ -39,7 +40,9 @@ type Result struct {
 	TempMaxC        float64   `json:"temp_max_c"`
 	EnergyWh        Energy    `json:"energy_wh"`
 	Cautions        []Caution `json:"cautions"`
-	Daily           []Day     `json:"daily"`
+	// Advice is there when the result was planned with advice (Plan).
+	Advice *Advice `json:"advice,omitempty"`
+	Daily  []Day   `json:"daily"`
 }
 
 // Brownout is the first time the planned cells, swapped as planned, could
@@ -101,6 +104,22 @@ type Inputs struct {
 // use RunWith.
 func Run(s scenario.Scenario) (Result, error) {
 	return RunWith(s, Inputs{})
+}
+
+// Plan simulates the scenario and works out its advice: the answer as
+// `nodelife plan` gives it. It runs the simulation many times; ctx cancels
+// it and o.Progress follows it.
+func Plan(ctx context.Context, s scenario.Scenario, in Inputs, o AdviceOptions) (Result, error) {
+	r, err := RunWith(s, in)
+	if err != nil {
+		return r, err
+	}
+	a, err := Advise(ctx, s, in, r, o)
+	if err != nil {
+		return r, err
+	}
+	r.Advice = &a
+	return r, nil
 }
 
 // RunWith simulates the scenario with the files it names.

@@ -26,7 +26,18 @@ type Scenario struct {
 	Node    Node
 	Cells   Cells
 	Harvest Harvest
+	Cost    Cost
 	Plan    Plan
+}
+
+// Cost is what a plan costs, in one currency the user names. The defaults
+// are invented demo figures.
+type Cost struct {
+	Currency    string
+	Cell        float64 // per cell
+	Panel       float64 // per harvester: charger, mounting, cable
+	PanelPerCm2 float64 // per cm² of harvester
+	Visit       float64 // per site visit: travel and labour
 }
 
 // Site is where the node is and what surrounds it.
@@ -299,6 +310,10 @@ type Plan struct {
 	Years      int
 	StepMin    int
 	ReservePct float64 // swap when the state of charge falls to this
+	// WeatherYears is how many weather years the advice draws; Seed seeds
+	// them.
+	WeatherYears int
+	Seed         int
 	// LeadDays is how long before the cells come due the visit is planned;
 	// the visit then moves back to the nearest allowed day.
 	LeadDays      int

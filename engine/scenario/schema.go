@@ -56,7 +56,8 @@ var objectDocs = map[string]string{
 	"node.events":      "Detections that wake a host processor and send a message.",
 	"cells":            "The node's battery: identical cells in series × parallel.",
 	"harvest":          "The energy harvester.",
-	"plan":             "The planning horizon.",
+	"plan":             "The planning horizon and the swap rules.",
+	"cost":             "What the plan costs, in one currency (defaults are invented demo figures).",
 }
 
 func schemaObject(path, doc string) map[string]any {
