@@ -2,6 +2,7 @@ package scenario
 
 import (
 	_ "embed"
+	"sync"
 	"time"
 	_ "time/tzdata" // IANA zones inside the binary and the WebAssembly app
 
@@ -324,12 +325,20 @@ type Plan struct {
 // Location returns the site's time zone. It panics on a zone that Parse would
 // have rejected.
 func (s Scenario) Location() *time.Location {
+	if loc, ok := zones.Load(s.Site.Timezone); ok {
+		return loc.(*time.Location)
+	}
 	loc, err := time.LoadLocation(s.Site.Timezone)
 	if err != nil {
 		panic("scenario: " + err.Error())
 	}
+	zones.Store(s.Site.Timezone, loc)
 	return loc
 }
+
+// zones remembers loaded time zones: time.LoadLocation reads a file each
+// call, and the advice runs a scenario hundreds of times.
+var zones sync.Map
 
 // StartTime returns local midnight at the start of the plan.
 func (s Scenario) StartTime() time.Time {

@@ -211,6 +211,7 @@ func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 	}
 	// Temperature-dependent values, recomputed only when the temperature moves.
 	thermal := cell.NewThermal(chem)
+	r20 := pack.ResistanceOhm(20)
 	var lastT float64
 	var e stepEnv
 	forget := func() { lastT, lastCond = math.NaN(), load.Conditions{Hour: -1} }
@@ -308,7 +309,7 @@ func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 				v := thermal.All(T)
 				e.usable = v.Usable
 				e.tempC, e.tempOK = T, T >= chem.OperatingMinC && T <= chem.OperatingMaxC
-				e.rOhm = pack.ResistanceOhm(20) * v.ResistanceFactor
+				e.rOhm = r20 * v.ResistanceFactor
 				e.socMin = m.socMinAt(e.rOhm)
 				e.trappedNew, e.socPerWhNew = ratedWh*(1-e.usable), 100/(ratedWh*e.usable)
 				e.sdWh = v.SelfDischargeYr * ratedWh / HoursPerYear // per hour, scaled below
