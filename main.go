@@ -5,6 +5,7 @@
 //	nodelife cells [--json]                the cell library with its sources
 //	nodelife presets [--json]              node profiles, occupancy patterns, climate presets
 //	nodelife compare [--json] A.json B.json [C.json D.json]  options side by side
+//	nodelife chart [--svg | --csv | --swaps-csv] SCENARIO.json    the chart as SVG, the rows as CSV
 //	nodelife demo                          print the built-in demo scenario
 //	nodelife schema                        print the scenario format's JSON Schema
 //	nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
@@ -61,8 +62,9 @@ usage:
   nodelife presets [--json]              node profiles, occupancy patterns, climate presets
   nodelife compare [--json] A.json B.json [C.json D.json]
                                          two to four options side by side, with their cost
-  nodelife chart [--svg|--csv] SCENARIO.json
-                                         the state-of-charge chart as SVG, or the daily rows as CSV
+  nodelife chart [--svg | --csv | --swaps-csv] [--width N --height N] SCENARIO.json
+                                         the state-of-charge chart as SVG, or the daily rows
+                                         or the swaps as CSV
   nodelife demo                          print the built-in demo scenario
   nodelife schema                        print the scenario format's JSON Schema
   nodelife serve [--addr 127.0.0.1:8080] serve the app from this binary
