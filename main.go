@@ -225,6 +225,23 @@ func readInputs(s scenario.Scenario, scenarioPath string, stdin bool) (plan.Inpu
 	return in, nil
 }
 
+// endText says in words how the first cells end, by the limit that ends
+// them.
+func endText(r plan.Result) string {
+	date := *r.FirstBrownout
+	limit := ""
+	if r.EndOfLifeLimit != nil {
+		limit = *r.EndOfLifeLimit
+	}
+	switch limit {
+	case "voltage":
+		return "on " + date + " the cells can no longer hold the node's minimum voltage under its peak current, if nobody swaps them"
+	case "temperature":
+		return "on " + date + " the cells leave their rated temperature range and the node browns out, swapped or not"
+	}
+	return "cells flat on " + date + " if nobody swaps them"
+}
+
 // dueText says in words why cells come due.
 func dueText(reason string, reservePct float64) string {
 	switch reason {
@@ -248,7 +265,7 @@ func summary(s scenario.Scenario, r plan.Result) string {
 	}
 	fmt.Fprintf(&b, "%s\n", r.Scenario)
 	if r.FirstBrownout != nil {
-		row("Lasts", "%s: cells flat on %s if nobody swaps them", r.Lifetime, *r.FirstBrownout)
+		row("Lasts", "%s: %s", r.Lifetime, endText(r))
 	} else {
 		row("Lasts", "%s: the cells outlive the %d-year plan", r.Lifetime, s.Plan.Years)
 	}

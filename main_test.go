@@ -56,7 +56,7 @@ func TestPlanSummary(t *testing.T) {
 	code, out, _ := runCmd(t, "", "plan", p)
 	require.Equal(t, 0, code)
 	r := mustPlan(t, scenario.Demo())
-	assert.Contains(t, out, "Lasts         "+r.Lifetime)
+	assert.Contains(t, out, "Lasts         "+r.Lifetime+": cells flat on "+*r.FirstBrownout)
 	assert.Contains(t, out, *r.FirstBrownout)
 	assert.Contains(t, out, "First swap    visit on "+r.Swaps[0].Date+"; the cells come due on "+r.Swaps[0].Due)
 	assert.Contains(t, out, "planning aid")
@@ -286,4 +286,16 @@ func TestPresetsCommand(t *testing.T) {
 	code, out, _ = runCmd(t, "", "presets")
 	assert.Equal(t, 0, code)
 	assert.Contains(t, out, "doorway-counter")
+}
+
+func TestSummarySaysWhatEndsTheCells(t *testing.T) {
+	s := scenario.Demo()
+	s.Site.Placement, s.Site.FixedTempC = scenario.Fixed, -25
+	s.Cells.Chemistry, s.Cells.Form = "alkaline", "D" // rated down to −18 °C
+	s.Plan.Years = 1
+	p := writeFile(t, "freezer.json", s.JSON())
+	code, out, _ := runCmd(t, "", "plan", "--fast", p)
+	require.Equal(t, 0, code)
+	assert.Contains(t, out, "leave their rated temperature range")
+	assert.NotContains(t, out, "cells flat on")
 }
