@@ -6,12 +6,25 @@
 //   nodelife.load(scenario)       -> Promise of the result; shows the scenario,
 //                                    or rejects and keeps the current one
 //   nodelife.scenario()           -> the current scenario (a full scenario file)
-//   nodelife.result()             -> the current result
-//   nodelife.debug()              -> counters and field rectangles, for tests
+//   nodelife.result()             -> the current result (with its advice once
+//                                    worked out in the background)
+//   nodelife.addEventListener("change", e => …)
+//                                 after every change of the scenario or its
+//                                 answer; e.detail.summary is the answer as text
+//   nodelife.debug()              -> counters and rectangles, for tests
 //
 // A scenario is a JSON string or an object. See embed-example.html.
+//
+// The page also keeps the scenario in localStorage (restored on the next
+// visit), mirrors the answer into a live region for screen readers, opens
+// scenario files dropped on it or chosen with the file picker, offers
+// downloads, passes pasted text to the app and follows the system's light or
+// dark preference.
 (() => {
   "use strict";
+
+  const SAVED = "nodelife.scenario";        // the scenario on screen
+  const SET_ASIDE = "nodelife.scenario.bad"; // a kept scenario that did not open
 
   const status = document.getElementById("status");
   let bridge = null; // the Go side's functions, once the app is running
@@ -19,6 +32,7 @@
   let settle;
   const ready = new Promise((resolve, reject) => { settle = { resolve, reject }; });
   ready.catch(() => {}); // the failure is shown in the page
+  const events = new EventTarget();
 
   function fail(message) {
     if (failed) return;
@@ -42,14 +56,99 @@
     return typeof scenario === "string" ? scenario : JSON.stringify(scenario);
   }
 
-  function call(name, arg) {
+  function call(name, ...args) {
     if (!bridge) {
       throw new Error(failed ? "nodelife is not running" : "nodelife is still loading: wait for nodelife.ready");
     }
-    const reply = bridge[name](arg);
+    const reply = bridge[name](...args);
     if (reply.error !== undefined) throw new Error(reply.error);
     return JSON.parse(reply.json);
   }
+
+  // localStorage can be missing or refuse (private windows, quotas): the
+  // app works without it.
+  function storage() {
+    try {
+      return window.localStorage;
+    } catch (e) {
+      return null;
+    }
+  }
+
+  function download(name, type, body) {
+    const url = URL.createObjectURL(new Blob([body], { type }));
+    const a = document.createElement("a");
+    a.href = url;
+    a.download = name;
+    a.hidden = true;
+    document.body.append(a);
+    a.click();
+    a.remove();
+    setTimeout(() => URL.revokeObjectURL(url), 60000);
+  }
+
+  // Files: the picker and drops on the page hand the file to the app, which
+  // reports a bad one in the page.
+  const picker = document.createElement("input");
+  picker.type = "file";
+  picker.accept = ".json,application/json";
+  picker.hidden = true;
+  picker.id = "nodelife-file";
+  picker.addEventListener("change", () => {
+    if (picker.files.length) openFile(picker.files[0]);
+    picker.value = "";
+  });
+  document.body.append(picker);
+
+  async function openFile(file) {
+    if (!bridge) return;
+    const body = await file.text();
+    bridge.open(body, file.name);
+  }
+
+  const dropHint = document.getElementById("drop");
+  function hasFiles(e) {
+    return e.dataTransfer && Array.from(e.dataTransfer.types || []).includes("Files");
+  }
+  window.addEventListener("dragover", (e) => {
+    if (!hasFiles(e)) return;
+    e.preventDefault();
+    e.dataTransfer.dropEffect = "copy";
+    if (dropHint) dropHint.hidden = false;
+  });
+  window.addEventListener("dragleave", (e) => {
+    if (dropHint && (e.relatedTarget === null || e.target === dropHint)) dropHint.hidden = true;
+  });
+  window.addEventListener("drop", (e) => {
+    if (!hasFiles(e)) return;
+    e.preventDefault();
+    if (dropHint) dropHint.hidden = true;
+    if (e.dataTransfer.files.length) openFile(e.dataTransfer.files[0]);
+  });
+
+  // Paste: ebiten cancels the canvas's key events, which stops the browser's
+  // paste; let Ctrl/Cmd+V through, then hand the pasted text to the app.
+  window.addEventListener("keydown", (e) => {
+    if ((e.ctrlKey || e.metaKey) && !e.altKey && (e.key === "v" || e.key === "V")) e.stopPropagation();
+  }, true);
+  document.addEventListener("paste", (e) => {
+    const t = e.clipboardData && e.clipboardData.getData("text/plain");
+    if (bridge && t) {
+      e.preventDefault();
+      bridge.paste(t);
+    }
+  });
+
+  // Light or dark, as the system says, now and when it changes.
+  const dark = window.matchMedia ? window.matchMedia("(prefers-color-scheme: dark)") : null;
+  function followTheme() {
+    const meta = document.querySelector('meta[name="theme-color"]');
+    if (meta) meta.content = dark && dark.matches ? "#14181C" : "#F6F4EF";
+    if (bridge) bridge.theme(!!(dark && dark.matches));
+  }
+  if (dark && dark.addEventListener) dark.addEventListener("change", followTheme);
+
+  const summary = document.getElementById("summary");
 
   const api = {
     ready,
@@ -64,10 +163,12 @@
     scenario() { return call("scenario"); },
     result() { return call("result"); },
     debug() { return call("debug"); },
+    addEventListener(type, fn, opts) { events.addEventListener(type, fn, opts); },
+    removeEventListener(type, fn, opts) { events.removeEventListener(type, fn, opts); },
   };
   // Hooks for the Go side (wasm/bridge_js.go).
   Object.defineProperties(api, {
-    _connect: { value: (b) => { bridge = b; } },
+    _connect: { value: (b) => { bridge = b; followTheme(); } },
     _ready: {
       value: () => {
         if (status) status.hidden = true;
@@ -75,6 +176,42 @@
       },
     },
     _fail: { value: fail },
+    _saved: {
+      value: () => {
+        const s = storage();
+        try {
+          return (s && s.getItem(SAVED)) || "";
+        } catch (e) {
+          return "";
+        }
+      },
+    },
+    _setAside: {
+      value: () => {
+        const s = storage();
+        try {
+          s.setItem(SET_ASIDE, s.getItem(SAVED) || "");
+          s.removeItem(SAVED);
+          return "localStorage " + SET_ASIDE;
+        } catch (e) {
+          return "it could not be kept";
+        }
+      },
+    },
+    _changed: {
+      value: (scenario, text) => {
+        const s = storage();
+        try {
+          if (s) s.setItem(SAVED, scenario);
+        } catch (e) {
+          console.warn("nodelife: the scenario could not be kept in this browser:", e);
+        }
+        if (summary) summary.textContent = text;
+        events.dispatchEvent(new CustomEvent("change", { detail: { summary: text } }));
+      },
+    },
+    _download: { value: download },
+    _pick: { value: () => picker.click() },
   });
   window.nodelife = api;
 

@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"bytes"
 	"encoding/json"
 	"fmt"
 	"runtime/debug"
@@ -12,14 +13,35 @@ import (
 	"nodelife/engine/scenario"
 )
 
+// Host is the page around the app: what the app asks of it. Its methods are
+// called on the app's goroutine outside the app's lock, so they may call the
+// app back.
+type Host interface {
+	// Changed tells that the scenario or its answer changed: the scenario
+	// file (to keep for the next visit) and the answer as plain text.
+	Changed(scenarioJSON []byte, summary string)
+	// Download offers data to the user as a file.
+	Download(name, mimeType string, data []byte)
+	// PickFile lets the user choose a scenario file, which the page hands
+	// to App.Open.
+	PickFile()
+}
+
 // Options configure an App. The zero value shows the demo in the light theme.
 type Options struct {
 	// Theme is the look; the zero Theme means Light().
 	Theme Theme
 	// Scenario is a scenario file to open; nil opens the built-in demo.
 	Scenario []byte
+	// Notice is a message to show across the page at start, e.g. why a
+	// saved scenario could not be opened; NoticeError marks it a problem.
+	Notice      string
+	NoticeError bool
 	// OnFirstFrame, if set, is called once after the first frame is drawn.
 	OnFirstFrame func()
+	// Host is the page; nil for none (downloads and the file picker do
+	// nothing).
+	Host Host
 }
 
 // App is the planner as an ebiten game. Its exported methods besides the
@@ -36,6 +58,19 @@ type App struct {
 	answer  Answer
 	form    *Form
 	page    Page
+	history History
+	drag    struct {
+		active bool
+		from   scenario.Scenario // the scenario before the drag
+	}
+	advice     adviceJob
+	menu       *Choice // the open header menu, or nil
+	notice     string
+	noticeErr  bool
+	sideScroll float64
+	mouseX     float64
+	mouseY     float64
+	hoverStale bool // the read-out must be laid out again
 
 	w, h, scale float64 // the window in CSS px and the device scale factor
 	dirty       bool    // the screen must be drawn again
@@ -44,7 +79,11 @@ type App struct {
 	drawn       bool
 	stats       Stats
 	failure     error // a panic caught in Draw, returned by the next Update
-	textCursor  bool
+	cursor      ebiten.CursorShapeType
+	host        Host
+	outbox      []func() // calls to the host, made after the lock is let go
+	pasted      []rune
+	tick        chan struct{} // closed at the next tick, for the advice's pacing
 }
 
 // Stats counts what the app has seen, for tests that must pace their input.
@@ -55,6 +94,7 @@ type Stats struct {
 	Releases int64 `json:"mouse_releases"` // … and releases
 	Keys     int64 `json:"keys"`           // special keys handled
 	Chars    int64 `json:"chars"`          // characters typed
+	Runs     int64 `json:"runs"`           // engine runs for a shown scenario
 }
 
 // New makes the app. It parses the fonts and runs the engine once.
@@ -72,7 +112,9 @@ func New(o Options) (*App, error) {
 			return nil, err
 		}
 	}
-	a := &App{theme: o.Theme, fonts: fonts, onFirst: o.OnFirstFrame, w: 1280, h: 720, scale: 1}
+	a := &App{theme: o.Theme, fonts: fonts, onFirst: o.OnFirstFrame, w: 1280, h: 720, scale: 1, host: o.Host,
+		notice: o.Notice, noticeErr: o.NoticeError, hoverStale: true}
+	a.mouseX, a.mouseY = -1, -1
 	a.form = NewForm(s)
 	r, err := a.planner.Run(s)
 	if err != nil {
@@ -82,22 +124,49 @@ func New(o Options) (*App, error) {
 	return a, nil
 }
 
-// setScenario makes s and its result current. Call with a.mu held.
+// setScenario makes s and its result current, tells the page, and asks for
+// the advice again. Call with a.mu held.
 func (a *App) setScenario(s scenario.Scenario, r plan.Result) {
-	js, err := json.Marshal(r)
+	a.stats.Runs++
+	a.scen, a.res = s, r
+	a.remarshal()
+	a.answer = AnswerFor(s, r)
+	if !a.drag.active {
+		a.changed()
+	}
+	a.wantAdvice()
+	a.layout()
+}
+
+// remarshal writes the current result as JSON.
+func (a *App) remarshal() {
+	js, err := json.Marshal(a.res)
 	if err != nil {
 		panic("ui: result does not marshal: " + err.Error())
 	}
-	a.scen, a.res, a.resJSON = s, r, js
-	a.answer = AnswerFor(s, r)
-	a.layout()
+	a.resJSON = js
+}
+
+// changed queues the page's change notice. Call with a.mu held.
+func (a *App) changed() {
+	if a.host == nil {
+		return
+	}
+	data, summary := a.scen.JSON(), Summary(a.scen.Name, a.answer)
+	a.outbox = append(a.outbox, func() { a.host.Changed(data, summary) })
 }
 
 // layout places everything for the current size and content and asks for a
 // redraw. Call with a.mu held.
 func (a *App) layout() {
-	a.page = LayoutPage(a.w, a.h, a.scen.Name, a.res, a.scen.Plan.ReservePct, a.answer, a.fonts, a.theme, 1/a.scale)
-	a.form.Layout(a.page.Form, a.fonts, a.theme)
+	undo, redo := a.history.Depth()
+	c := PageContent{Name: a.scen.Name, Result: a.res, ReservePct: a.scen.Plan.ReservePct, Answer: a.answer,
+		Advice: a.advice.status, Notice: a.notice, NoticeError: a.noticeErr,
+		CanUndo: undo > 0, CanRedo: redo > 0, SideScroll: a.sideScroll}
+	a.page = LayoutPage(a.w, a.h, c, a.fonts, a.theme, 1/a.scale)
+	a.sideScroll = a.page.SideScroll
+	a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme)
+	a.hoverStale = true
 	a.dirty = true
 }
 
@@ -110,9 +179,22 @@ func (a *App) resize(w, h, scale float64) {
 	a.layout()
 }
 
+// setNotice shows msg across the page ("" removes it). Call with a.mu held.
+func (a *App) setNotice(msg string, isErr bool) {
+	if msg == a.notice && isErr == a.noticeErr {
+		return
+	}
+	a.notice, a.noticeErr = msg, isErr
+	a.layout()
+}
+
 // step applies one tick of input. Call with a.mu held.
 func (a *App) step(in *Input) {
 	a.stats.Ticks++
+	if a.tick != nil {
+		close(a.tick)
+		a.tick = nil
+	}
 	if in.Pressed {
 		a.stats.Presses++
 	}
@@ -121,31 +203,150 @@ func (a *App) step(in *Input) {
 	}
 	a.stats.Keys += int64(len(in.Keys))
 	a.stats.Chars += int64(len(in.Chars))
+
+	// Shortcuts act on the whole app; the fields do not see them.
+	keys := in.Keys[:0:0]
+	for _, k := range in.Keys {
+		switch k {
+		case KeyUndo:
+			a.undo(false)
+		case KeyRedo:
+			a.undo(true)
+		case KeySave:
+			a.act("save")
+		case KeyOpen:
+			a.act("open-file")
+		default:
+			keys = append(keys, k)
+		}
+	}
+	in.Keys = keys
+
+	// An open menu takes the pointer and keys first.
+	if a.menuStep(in) {
+		a.hover(in.MouseX, in.MouseY)
+		return
+	}
+	// The notice's dismiss button and the header's buttons take a press.
+	if in.Pressed && !a.page.Dismiss.Empty() && a.page.Dismiss.Contains(in.MouseX, in.MouseY) {
+		a.setNotice("", false)
+		in.Pressed = false
+	}
+	for i := range a.page.Buttons {
+		b := &a.page.Buttons[i]
+		if hv := b.At.Contains(in.MouseX, in.MouseY); hv != b.Hover {
+			b.Hover, a.dirty = hv, true
+		}
+		if in.Pressed && b.Hover {
+			in.Pressed = false
+			if b.Enabled {
+				a.act(b.ID)
+			}
+		}
+	}
+
 	changed, edit := a.form.Update(in)
 	if edit != nil {
-		a.form.Settle(a.apply(*edit))
+		a.form.Settle(a.apply(*edit), a.scen)
 		changed = true
 	}
 	if changed {
-		a.form.Layout(a.page.Form, a.fonts, a.theme) // help and error lines may have changed
+		a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme) // help and error lines may have changed
+		a.dirty = true
+	}
+
+	// The scrolling column.
+	if in.WheelY != 0 && a.page.Side.Contains(in.MouseX, in.MouseY) && a.form.OpenList() == nil {
+		if y := clampScroll(a.sideScroll-in.WheelY*40, a.page.SideContent, a.page.Side.H); y != a.sideScroll {
+			a.sideScroll = y
+			a.layout()
+		}
+	}
+	a.hover(in.MouseX, in.MouseY)
+	a.maybeStartAdvice()
+}
+
+// hover lays out the chart's read-out for the pointer at x, y.
+func (a *App) hover(x, y float64) {
+	if x == a.mouseX && y == a.mouseY && !a.hoverStale {
+		return
+	}
+	a.mouseX, a.mouseY, a.hoverStale = x, y, false
+	v := &a.page.chart
+	inside := v.HoverArea().Contains(x, y) && a.form.OpenList() == nil && !a.form.Dragging() &&
+		(a.page.Mode == Wide || a.page.Side.Contains(x, y))
+	switch {
+	case inside:
+		a.page.hover = layoutHover(v, x, y, a.fonts, a.theme)
+		a.dirty = true
+	case a.page.hover.Day >= 0:
+		a.page.hover = hoverView{Day: -1}
 		a.dirty = true
 	}
 }
 
 // apply checks an edit with the engine and, if it is good, recomputes. It
-// returns the engine's reason for refusing it, or "".
+// returns the engine's reason for refusing it, or "". A slider's drag is one
+// step of the history, recorded when it ends.
 func (a *App) apply(e Edit) string {
-	s, err := withValue(a.scen, e.Path, e.Text)
+	s, err := applyEdit(a.scen, e)
 	if err != nil {
 		return reason(err, e.Path)
+	}
+	same := bytes.Equal(s.JSON(), a.scen.JSON())
+	if e.Drag && !a.drag.active {
+		a.drag.active, a.drag.from = true, a.scen
+	}
+	if !e.Drag && a.drag.active { // the drag ends
+		a.drag.active = false
+		if !bytes.Equal(s.JSON(), a.drag.from.JSON()) {
+			a.history.Record(a.drag.from)
+		}
+		if same {
+			a.changed()
+			a.layout()
+			return ""
+		}
+	} else if same {
+		return ""
+	} else if !e.Drag {
+		a.history.Record(a.scen)
 	}
 	r, err := a.planner.Run(s)
 	if err != nil {
 		return reason(err, e.Path)
 	}
-	a.form.SetValues(s)
+	if a.notice != "" && !a.noticeErr {
+		a.notice = "" // an info notice is about what came before
+	}
 	a.setScenario(s, r)
 	return ""
+}
+
+// undo takes a step back (or forward with redo) in the history.
+func (a *App) undo(redo bool) {
+	if a.drag.active || a.form.Dragging() {
+		return
+	}
+	var s scenario.Scenario
+	var ok bool
+	if redo {
+		s, ok = a.history.Redo(a.scen)
+	} else {
+		s, ok = a.history.Undo(a.scen)
+	}
+	if !ok {
+		return
+	}
+	r, err := a.planner.Run(s)
+	if err != nil {
+		a.setNotice("That step cannot be shown: "+err.Error(), true)
+		return
+	}
+	a.setScenario(s, r)
+	a.form.Sync(s)
+	a.form.Cancel() // a typed value or a refusal belonged to the scenario left
+	a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme)
 }
 
 // Update is ebiten's tick: one input snapshot, handed to the widgets.
@@ -156,21 +357,57 @@ func (a *App) Update() (err error) {
 		}
 	}()
 	a.mu.Lock()
-	defer a.mu.Unlock()
 	if a.failure != nil {
+		a.mu.Unlock()
 		return a.failure
 	}
 	in := ReadInput(a.scale)
+	in.Chars = append(in.Chars, a.pasted...)
+	a.pasted = nil
 	a.step(&in)
-	if want := a.form.hover >= 0; want != a.textCursor {
-		a.textCursor = want
-		shape := ebiten.CursorShapeDefault
-		if want {
-			shape = ebiten.CursorShapeText
-		}
+	if shape := a.cursorShape(in.MouseX, in.MouseY); shape != a.cursor {
+		a.cursor = shape
 		ebiten.SetCursorShape(shape)
 	}
+	calls := a.outbox
+	a.outbox = nil
+	a.mu.Unlock()
+	for _, c := range calls {
+		c()
+	}
 	return nil
+}
+
+// cursorShape is the pointer's shape over x, y: a text cursor over typed
+// values, a hand over what acts on a click.
+func (a *App) cursorShape(x, y float64) ebiten.CursorShapeType {
+	if r := a.form.OpenList(); r != nil && r.Choice.List.Contains(x, y) {
+		return ebiten.CursorShapePointer
+	}
+	if a.menu != nil && a.menu.List.Contains(x, y) {
+		return ebiten.CursorShapePointer
+	}
+	if a.form.View.Contains(x, y) {
+		for _, r := range a.form.Rows {
+			switch {
+			case r.Slider != nil && r.Slider.Hit(x, y):
+				return ebiten.CursorShapePointer
+			case r.Box.Contains(x, y) && r.Text != nil:
+				return ebiten.CursorShapeText
+			case r.Box.Contains(x, y):
+				return ebiten.CursorShapePointer
+			}
+		}
+	}
+	for _, b := range a.page.Buttons {
+		if b.Enabled && b.At.Contains(x, y) {
+			return ebiten.CursorShapePointer
+		}
+	}
+	if a.page.Dismiss.Contains(x, y) {
+		return ebiten.CursorShapePointer
+	}
+	return ebiten.CursorShapeDefault
 }
 
 // Draw paints the screen when something changed and leaves it alone when not
@@ -193,6 +430,10 @@ func (a *App) Draw(screen *ebiten.Image) {
 		p := NewPainter(screen, a.scale, a.fonts, a.white)
 		drawPage(p, &a.page, a.theme)
 		drawForm(p, a.form, a.theme)
+		drawFormOverlay(p, a.form, a.theme)
+		if a.menu != nil {
+			drawChoiceList(p, a.menu, a.theme)
+		}
 		a.dirty = false
 		a.stats.Frames++
 		first = !a.drawn

@@ -90,14 +90,14 @@ func TestAppRefusesABadValueAndKeepsTheResult(t *testing.T) {
 	if !bytes.Equal(a.ResultJSON(), before) {
 		t.Error("a refused value changed the result")
 	}
-	if f := a.form.Field("node.vision.fps"); f.Text != "61" || !f.Focused {
-		t.Errorf("the refused field: Text %q Focused %v; want the bad text kept in place, focused", f.Text, f.Focused)
+	if f := a.form.Row("node.vision.fps"); f.Text.Text != "61" || !f.Focused() {
+		t.Errorf("the refused field: Text %q Focused %v; want the bad text kept in place, focused", f.Text.Text, f.Focused())
 	}
 }
 
 func TestAppClearsCapacityToTheRatedValue(t *testing.T) {
 	a := newApp(t, 1280, 720)
-	click(a, a.Debug().Fields["cells.capacity_mah"])
+	tabTo(t, a, "cells.capacity_mah")
 	a.step(chars("9500"))
 	a.step(keys(KeyEnter))
 	s, _ := scenario.Parse(a.ScenarioJSON())
@@ -110,8 +110,8 @@ func TestAppClearsCapacityToTheRatedValue(t *testing.T) {
 	if s.Cells.CapacityMAh != 0 {
 		t.Errorf("capacity after clearing: %v, want unset (0)", s.Cells.CapacityMAh)
 	}
-	if f := a.form.Field("cells.capacity_mah"); f.Text != "19000" {
-		t.Errorf("cleared capacity shows %q, want the D cell's rated 19000", f.Text)
+	if f := a.form.Row("cells.capacity_mah"); f.Text.Text != "19000" {
+		t.Errorf("cleared capacity shows %q, want the D cell's rated 19000", f.Text.Text)
 	}
 }
 

@@ -222,3 +222,63 @@ func TestChartSwapOnTheFlatDate(t *testing.T) {
 		}
 	}
 }
+
+// farNorth is an outdoor lithium-ion node with a panel in the far north:
+// the cells leave their rated range in winter and the summer harvest is
+// far above the load.
+func farNorth() scenario.Scenario {
+	s := scenario.Demo()
+	s.Site.Placement, s.Site.LatDeg, s.Site.LonDeg = scenario.Outdoor, 69.65, 18.96
+	s.Site.Climate.Preset = "subarctic"
+	s.Harvest.Kind = scenario.HarvestPanel
+	s.Cells.Chemistry, s.Cells.Form = "li-ion", "18650"
+	s.Plan.Years = 3
+	return s
+}
+
+func TestChartBarsCutAFarLargerHarvest(t *testing.T) {
+	s := farNorth()
+	r := mustPlan(t, s)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, fonts(t), Light(), 1)
+	maxH, maxL := 0.0, 0.0
+	for _, m := range v.Months {
+		maxH, maxL = math.Max(maxH, m.HarvestWhPerDay), math.Max(maxL, m.LoadWhPerDay)
+	}
+	if !v.HasHarvest || maxH < harvestCutRatio*maxL {
+		t.Fatalf("harvest %g, load %g Wh/day: the test needs a harvest far above the load", maxH, maxL)
+	}
+	if !v.HarvestCut || v.Energy.V1 >= maxH || v.Energy.V1 < maxL {
+		t.Errorf("scale to %g with harvest up to %g and load up to %g: want it cut above the load", v.Energy.V1, maxH, maxL)
+	}
+	if !strings.Contains(joined(&v.Labels), "harvest (cut at "+formatWh(v.Energy.V1)+")") {
+		t.Errorf("the legend does not say the harvest is cut: %q", joined(&v.Labels))
+	}
+	// Monthly means: one month per calendar month of the 3-year plan.
+	if len(v.Months) != 36 || v.Months[0].X0 != v.Plot.X || math.Abs(v.Months[35].X1-v.Plot.Right()) > 1e-9 {
+		t.Errorf("%d months from %g to %g, plot %v", len(v.Months), v.Months[0].X0, v.Months[len(v.Months)-1].X1, v.Plot)
+	}
+}
+
+func TestChartNamesWhatEndsTheCells(t *testing.T) {
+	s := farNorth()
+	r := mustPlan(t, s)
+	if r.EndOfLifeLimit == nil || *r.EndOfLifeLimit != "temperature" {
+		t.Fatalf("end of life %v: the test needs cells stopped by the cold", r.EndOfLifeLimit)
+	}
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, fonts(t), Light(), 1)
+	if v.Flat == nil || !strings.HasPrefix(v.Flat.Label, "outside rated temperature") {
+		t.Errorf("marker %+v; want it to say the cells are outside their rated temperature", v.Flat)
+	}
+	a := AnswerFor(s, r)
+	if !strings.Contains(a.Sub, "outside their rated temperature") || strings.Contains(a.Sub, "flat") {
+		t.Errorf("answer %q; want the temperature, not a flat cell", a.Sub)
+	}
+}
+
+func TestNiceCeil(t *testing.T) {
+	for _, c := range []struct{ v, want float64 }{{0.034, 0.05}, {0.05, 0.05}, {2.47, 2.5}, {3, 5}, {7, 10}, {0, 1}, {120, 200}} {
+		if got := NiceCeil(c.v); math.Abs(got-c.want) > 1e-12 {
+			t.Errorf("NiceCeil(%g) = %g, want %g", c.v, got, c.want)
+		}
+	}
+}

@@ -15,6 +15,11 @@ const (
 	roleRule
 	roleCautionFill
 	roleCautionEdge
+	roleAccent
+	roleHarvest
+	roleLoad
+	roleBackground
+	roleMean
 )
 
 func (p Palette) of(r role) color.NRGBA {
@@ -33,6 +38,16 @@ func (p Palette) of(r role) color.NRGBA {
 		return p.CautionFill
 	case roleCautionEdge:
 		return p.CautionEdge
+	case roleAccent:
+		return p.Accent
+	case roleHarvest:
+		return p.Harvest
+	case roleLoad:
+		return p.Load
+	case roleBackground:
+		return p.Background
+	case roleMean:
+		return p.Mean
 	}
 	return p.Ink
 }

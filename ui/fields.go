@@ -5,74 +5,195 @@ import (
 	"strings"
 
 	"nodelife/engine/cell"
+	"nodelife/engine/climate"
 	"nodelife/engine/scenario"
 )
 
-// fieldSpec is one editable number: its path, our short label and the step of
-// an arrow key.
+// control is the kind of input a row shows.
+type control int
+
+const (
+	ctlNumber   control = iota // a typed number
+	ctlDate                    // a typed date
+	ctlPosition                // typed or pasted "latitude, longitude"
+	ctlZone                    // a typed time zone name
+	ctlDrop                    // a drop-down
+	ctlSegments                // a few options side by side
+)
+
+// fieldSpec is one input: its path, our short label, the kind of control,
+// the step of an arrow key and, for a slider, its stops.
 type fieldSpec struct {
 	path, label string
+	ctl         control
 	step        float64
+	stops       []float64
 }
 
-// groupSpec is a titled run of fields.
+// groupSpec is a titled run of inputs.
 type groupSpec struct {
 	title  string
 	fields []fieldSpec
 }
 
-// specsFor lists the editable fields for a scenario. The temperature field is
-// the one its placement uses.
+// Slider stops: evenly spaced along the track, so the common range gets most
+// of it. Frame rates of always-on vision run from about 1 to 30 fps (our
+// design notes, PRODUCT.md); events per hour from a quiet corridor to a busy
+// doorway (common practice), with the typed field for anything beyond.
+var (
+	fpsStops    = []float64{0, 0.5, 1, 2, 3, 4, 5, 6, 8, 10, 12, 15, 20, 25, 30}
+	eventsStops = []float64{0, 1, 2, 3, 5, 8, 10, 12, 15, 20, 30, 40, 60, 80, 100, 150, 200, 300, 500}
+)
+
+// specsFor lists the inputs for a scenario, in Tab order. Which rows show
+// depends on the scenario: the temperature of its placement, the climate
+// outdoors, the harvester's area when there is one.
 func specsFor(s scenario.Scenario) []groupSpec {
-	temp := fieldSpec{"site.indoor_temp_c", "Indoor temperature", 1}
+	site := []fieldSpec{
+		{pathPlace, "Example place", ctlDrop, 0, nil},
+		{pathPosition, "Lat, lon", ctlPosition, 0, nil},
+		{"site.timezone", "Time zone", ctlZone, 0, nil},
+		{"site.placement", "Placement", ctlSegments, 0, nil},
+	}
 	switch s.Site.Placement {
 	case scenario.Fixed:
-		temp = fieldSpec{"site.fixed_temp_c", "Room temperature", 1}
+		site = append(site, fieldSpec{"site.fixed_temp_c", "Room temperature", ctlNumber, 1, nil})
 	case scenario.Outdoor:
-		temp = fieldSpec{"site.outdoor_mean_c", "Outdoor mean", 1}
+		site = append(site, fieldSpec{"site.climate.preset", "Climate", ctlDrop, 0, nil})
+		if s.Site.Climate.Preset == "none" && s.Site.Climate.TminC == nil {
+			site = append(site, fieldSpec{"site.outdoor_mean_c", "Outdoor mean", ctlNumber, 1, nil})
+		}
+	default:
+		site = append(site, fieldSpec{"site.indoor_temp_c", "Indoor temperature", ctlNumber, 1, nil})
+	}
+	harvest := []fieldSpec{{"harvest.kind", "Harvester", ctlSegments, 0, nil}}
+	switch s.Harvest.Kind {
+	case scenario.HarvestPanel:
+		harvest = append(harvest, fieldSpec{"harvest.panel.area_cm2", "Panel area", ctlNumber, 5, nil})
+	case scenario.HarvestIndoor:
+		harvest = append(harvest, fieldSpec{"harvest.indoor.area_cm2", "Cell area", ctlNumber, 5, nil})
 	}
 	return []groupSpec{
+		{"Site", site},
 		{"Node", []fieldSpec{
-			{"node.vision.fps", "Frame rate", 1},
-			{"node.vision.frame_uj", "Energy per frame", 10},
-			{"node.events.per_hour", "Events per hour", 1},
-			{"node.events.wake_mj", "Energy per event", 5},
-			{"node.sleep_uw", "Sleep power", 5},
+			{"node.profile", "Node profile", ctlDrop, 0, nil},
+			{"node.vision.fps", "Frame rate", ctlNumber, 1, fpsStops},
+			{"node.events.per_hour", "Events per hour", ctlNumber, 1, eventsStops},
+			{"node.vision.frame_uj", "Energy per frame", ctlNumber, 10, nil},
+			{"node.events.wake_mj", "Energy per event", ctlNumber, 5, nil},
+			{"node.sleep_uw", "Sleep power", ctlNumber, 5, nil},
+			{"node.radio.class", "Radio", ctlDrop, 0, nil},
 		}},
-		{"Cells", []fieldSpec{{"cells.capacity_mah", "Cell capacity", 100}}},
-		{"Site", []fieldSpec{temp}},
+		{"Cells", []fieldSpec{
+			{"cells.chemistry", "Chemistry", ctlDrop, 0, nil},
+			{"cells.form", "Form factor", ctlDrop, 0, nil},
+			{"cells.parallel", "In parallel", ctlNumber, 1, nil},
+			{"cells.capacity_mah", "Cell capacity", ctlNumber, 100, nil},
+		}},
+		{"Harvest", harvest},
 		{"Plan", []fieldSpec{
-			{"plan.years", "Plan length", 1},
-			{"plan.reserve_pct", "Swap reserve", 1},
+			{"plan.start", "Start", ctlDate, 0, nil},
+			{"plan.years", "Plan length", ctlNumber, 1, nil},
+			{"plan.reserve_pct", "Swap reserve", ctlNumber, 1, nil},
 		}},
 	}
 }
 
-// groupInfo is the read-only line beside a group's title: what its fields
-// cannot change yet. Each is given long and, where there is one, short
-// (chemistry by its ID); the layout takes the long one when it fits.
+// Short names of the chemistries for the box (the list shows the full name):
+// the trade's shorthand by active materials (common practice).
+var chemistryShort = map[string]string{
+	"li-socl2": "Li-SOCl2", "li-mno2": "Li-MnO2", "li-fes2": "Li-FeS2", "alkaline": "alkaline",
+	"li-ion": "Li-ion", "lifepo4": "LiFePO4", "nimh-lsd": "NiMH LSD",
+}
+
+// Names of the radio classes in our words.
+var radioNames = map[string][2]string{
+	"none":  {"in the wake", "message energy counted in the wake"},
+	"fixed": {"fixed energy", "a fixed energy per message"},
+	"ble":   {"BLE", "Bluetooth Low Energy advertising"},
+	"lora":  {"LoRa-class", "long range, sub-GHz"},
+	"wifi":  {"Wi-Fi", "connect and post"},
+	"lpwa":  {"LPWA", "cellular LTE-M / NB-IoT"},
+}
+
+// optionsFor lists what a choice offers for s.
+func optionsFor(s scenario.Scenario, path string) []Option {
+	switch path {
+	case pathPlace:
+		opts := []Option{{Value: "", Label: "your own site"}}
+		for _, p := range Places() {
+			opts = append(opts, Option{Value: p.Name, Label: p.Name, Detail: fmt.Sprintf("%s, %s", FormatNumber(p.LatDeg), FormatNumber(p.LonDeg))})
+		}
+		return opts
+	case "site.placement":
+		return []Option{{scenario.Outdoor, "outdoor", ""}, {scenario.Indoor, "indoor", ""}, {scenario.Fixed, "fixed °C", ""}}
+	case "harvest.kind":
+		return []Option{{scenario.HarvestNone, "none", ""}, {scenario.HarvestPanel, "panel", ""}, {scenario.HarvestIndoor, "indoor", ""}}
+	case "site.climate.preset":
+		opts := []Option{{Value: "none", Label: "none", Detail: "mean and ranges below"}}
+		for _, p := range climate.Presets() {
+			name, _, _ := strings.Cut(p.Name, " (")
+			opts = append(opts, Option{Value: p.ID, Label: name})
+		}
+		return opts
+	case "node.profile":
+		opts := []Option{{Value: "custom", Label: "custom", Detail: "your own values"}}
+		for _, p := range scenario.Profiles() {
+			opts = append(opts, Option{Value: p.ID, Label: p.Name})
+		}
+		return opts
+	case "node.radio.class":
+		f, _ := scenario.FieldByPath(path)
+		var opts []Option
+		for _, id := range f.Enum {
+			n := radioNames[id]
+			opts = append(opts, Option{Value: id, Label: n[0], Detail: n[1]})
+		}
+		return opts
+	case "cells.chemistry":
+		var opts []Option
+		for _, c := range cell.Library() {
+			short := chemistryShort[c.ID]
+			if short == "" {
+				short = c.ID
+			}
+			opts = append(opts, Option{Value: c.ID, Label: short, Detail: c.Name})
+		}
+		return opts
+	case "cells.form":
+		var opts []Option
+		if c, ok := cell.Lookup(s.Cells.Chemistry); ok {
+			for _, f := range c.Forms {
+				opts = append(opts, Option{Value: f.Name, Label: f.Name, Detail: FormatNumber(f.CapacityMAh) + " mAh"})
+			}
+		}
+		return opts
+	}
+	panic("ui: no options for " + path)
+}
+
+// groupInfo is the read-only line beside a group's title, long then short;
+// the layout takes the long one when it fits.
 func groupInfo(title string, s scenario.Scenario) []string {
 	switch title {
 	case "Cells":
 		// 1S1P: cells in series and in parallel, the trade's shorthand.
-		pack := fmt.Sprintf("%dS%dP", s.Cells.Series, s.Cells.Parallel)
-		short := s.Cells.Form + " · " + s.Cells.Chemistry + " · " + pack
-		if c, ok := cell.Lookup(s.Cells.Chemistry); ok {
-			name, _, _ := strings.Cut(c.Name, " (") // the name without its qualifier
-			return []string{s.Cells.Form + " · " + name + " · " + pack, short}
-		}
-		return []string{short}
-	case "Site":
-		return []string{s.Site.Placement + " · " + s.Site.Timezone}
-	case "Plan":
-		return []string{"from " + s.Plan.Start}
+		return []string{fmt.Sprintf("%dS%dP", s.Cells.Series, s.Cells.Parallel)}
+	case "Node":
+		return nil
 	}
 	return nil
 }
 
-// valueText is the field's value in s as the box shows it. An unset cell
+// valueText is an input's value in s as its control shows it. An unset cell
 // capacity shows the form factor's rated capacity.
 func valueText(s scenario.Scenario, path string) string {
+	switch path {
+	case pathPosition:
+		return formatPosition(s.Site.LatDeg, s.Site.LonDeg)
+	case pathPlace:
+		return placeNear(s.Site.LatDeg, s.Site.LonDeg, s.Site.Timezone)
+	}
 	f, ok := scenario.FieldByPath(path)
 	if !ok {
 		panic("ui: unknown field " + path)
@@ -91,15 +212,44 @@ func valueText(s scenario.Scenario, path string) string {
 		return FormatNumber(v)
 	case int:
 		return fmt.Sprint(v)
+	case string:
+		return v
 	}
-	panic("ui: field " + path + " is not a number")
+	panic("ui: field " + path + " has no single value")
 }
 
-// helpText is the one line under a field: the engine's own description, and
-// for an unset capacity, where the number comes from.
-func helpText(s scenario.Scenario, f scenario.Field) string {
-	if f.Path == "cells.capacity_mah" && s.Cells.CapacityMAh == 0 {
-		return "rated capacity of one " + s.Cells.Form + " cell; type a value to override"
+// helpText is the one line under an input: the engine's own description,
+// and for an unset capacity, where the number comes from.
+func helpText(s scenario.Scenario, path string) string {
+	switch path {
+	case pathPlace:
+		return "sets latitude, longitude, time zone and climate"
+	case pathPosition:
+		return `degrees north and east (south and west negative); paste "59.91, 10.75"`
+	case "cells.capacity_mah":
+		if s.Cells.CapacityMAh == 0 {
+			return "rated capacity of one " + s.Cells.Form + " cell; type a value to override"
+		}
+	case "node.profile":
+		// The field's own description is about files; in the app a pick
+		// sets every node input, and the profile's note says what it is.
+		if p, ok := scenario.LookupProfile(s.Node.Profile); ok {
+			return p.Note + "; picking it sets all the node's values"
+		}
+		return "your own node; pick a profile to start from a typical node of that kind"
+	case "site.climate.preset":
+		if p, ok := climate.LookupPreset(s.Site.Climate.Preset); ok {
+			return p.Note
+		}
+	case "cells.chemistry":
+		if c, ok := cell.Lookup(s.Cells.Chemistry); ok {
+			kind := "rechargeable"
+			if c.Primary {
+				kind = "primary, never charge"
+			}
+			return c.Name + "; " + kind
+		}
 	}
+	f, _ := scenario.FieldByPath(path)
 	return f.Doc
 }

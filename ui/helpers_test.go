@@ -44,3 +44,15 @@ func click(a *App, r Rect) {
 	a.step(press(x, y))
 	a.step(release(x, y))
 }
+
+// tabTo presses Tab until the input at path has the keyboard.
+func tabTo(t *testing.T, a *App, path string) {
+	t.Helper()
+	for range len(a.form.Rows) + 1 {
+		if r := a.form.Focused(); r != nil && r.Path == path {
+			return
+		}
+		a.step(keys(KeyTab))
+	}
+	t.Fatalf("Tab never reaches %s", path)
+}

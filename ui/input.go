@@ -22,7 +22,13 @@ const (
 	KeyDown
 	KeyHome
 	KeyEnd
+	KeyPageUp
+	KeyPageDown
 	KeySelectAll // Ctrl+A or Cmd+A
+	KeyUndo      // Ctrl+Z or Cmd+Z
+	KeyRedo      // Shift+Ctrl+Z, Shift+Cmd+Z or Ctrl+Y
+	KeyOpen      // Ctrl+O or Cmd+O
+	KeySave      // Ctrl+S or Cmd+S
 )
 
 // Input is everything the user did in one tick, in CSS pixels. It is built
@@ -32,10 +38,21 @@ type Input struct {
 	MouseX, MouseY float64 // pointer position
 	Pressed        bool    // the primary button or a touch went down this tick
 	Released       bool    // … and came up this tick
+	Down           bool    // the primary button or a touch is held
 	WheelY         float64 // wheel turned this tick, in lines; positive is up
 	Shift          bool    // held during this tick
 	Keys           []Key   // special keys pressed this tick, repeats included
-	Chars          []rune  // characters typed this tick, in order
+	Chars          []rune  // characters typed (or pasted) this tick, in order
+}
+
+// Has reports whether k was pressed this tick.
+func (in *Input) Has(k Key) bool {
+	for _, x := range in.Keys {
+		if x == k {
+			return true
+		}
+	}
+	return false
 }
 
 var keyMap = map[ebiten.Key]Key{
@@ -45,6 +62,13 @@ var keyMap = map[ebiten.Key]Key{
 	ebiten.KeyArrowLeft: KeyLeft, ebiten.KeyArrowRight: KeyRight,
 	ebiten.KeyArrowUp: KeyUp, ebiten.KeyArrowDown: KeyDown,
 	ebiten.KeyHome: KeyHome, ebiten.KeyEnd: KeyEnd,
+	ebiten.KeyPageUp: KeyPageUp, ebiten.KeyPageDown: KeyPageDown,
+}
+
+// Shortcuts with Ctrl (or Cmd on a Mac) held.
+var commandMap = map[ebiten.Key]Key{
+	ebiten.KeyA: KeySelectAll, ebiten.KeyZ: KeyUndo, ebiten.KeyY: KeyRedo,
+	ebiten.KeyO: KeyOpen, ebiten.KeyS: KeySave,
 }
 
 // Key repeat for held editing and arrow keys, in ticks at ebiten's 60 ticks a
@@ -63,7 +87,14 @@ func ReadInput(scale float64) Input {
 	in.MouseX, in.MouseY = float64(x)/scale, float64(y)/scale
 	in.Pressed = inpututil.IsMouseButtonJustPressed(ebiten.MouseButtonLeft)
 	in.Released = inpututil.IsMouseButtonJustReleased(ebiten.MouseButtonLeft)
+	in.Down = ebiten.IsMouseButtonPressed(ebiten.MouseButtonLeft)
 	// A touch acts as the primary button at the touch point.
+	for _, id := range ebiten.AppendTouchIDs(nil) {
+		tx, ty := ebiten.TouchPosition(id)
+		in.MouseX, in.MouseY = float64(tx)/scale, float64(ty)/scale
+		in.Down = true
+		break
+	}
 	for _, id := range inpututil.AppendJustPressedTouchIDs(nil) {
 		tx, ty := ebiten.TouchPosition(id)
 		in.MouseX, in.MouseY = float64(tx)/scale, float64(ty)/scale
@@ -86,8 +117,13 @@ func ReadInput(scale float64) Input {
 		if !repeat {
 			continue
 		}
-		if k == ebiten.KeyA && command {
-			in.Keys = append(in.Keys, KeySelectAll)
+		if key, ok := commandMap[k]; ok && command {
+			if d == 1 {
+				if key == KeyUndo && in.Shift {
+					key = KeyRedo
+				}
+				in.Keys = append(in.Keys, key)
+			}
 			continue
 		}
 		if key, ok := keyMap[k]; ok && (d == 1 || repeatable(key)) {
@@ -104,7 +140,7 @@ func ReadInput(scale float64) Input {
 
 func repeatable(k Key) bool {
 	switch k {
-	case KeyBackspace, KeyDelete, KeyLeft, KeyRight, KeyUp, KeyDown:
+	case KeyBackspace, KeyDelete, KeyLeft, KeyRight, KeyUp, KeyDown, KeyPageUp, KeyPageDown:
 		return true
 	}
 	return false

@@ -176,6 +176,46 @@ func (p *Painter) Polygon(xs, ys []float64, c color.NRGBA) {
 	p.triangles(c, true)
 }
 
+// Columns fills side-by-side rectangles from xs[i] to xs[i+1], y0 to y1,
+// rectangle i in colors[i], in one draw call (len(xs) = len(colors) + 1).
+func (p *Painter) Columns(xs []float64, y0, y1 float64, colors []color.NRGBA) {
+	p.vs, p.is = p.vs[:0], p.is[:0]
+	wb := p.white.Bounds()
+	sx, sy := float32(wb.Min.X)+0.5, float32(wb.Min.Y)+0.5
+	top, bottom := float32(p.px(y0)), float32(p.px(y1))
+	for i, c := range colors {
+		if len(p.vs)+4 > 1<<16 {
+			break
+		}
+		r, g, b, a := c.RGBA()
+		x0, x1 := float32(p.px(xs[i])), float32(p.px(xs[i+1]))
+		v := ebiten.Vertex{SrcX: sx, SrcY: sy, ColorR: float32(r) / 0xffff, ColorG: float32(g) / 0xffff,
+			ColorB: float32(b) / 0xffff, ColorA: float32(a) / 0xffff}
+		n := uint16(len(p.vs))
+		for _, xy := range [4][2]float32{{x0, top}, {x1, top}, {x0, bottom}, {x1, bottom}} {
+			v.DstX, v.DstY = xy[0], xy[1]
+			p.vs = append(p.vs, v)
+		}
+		p.is = append(p.is, n, n+1, n+2, n+1, n+3, n+2)
+	}
+	if len(p.is) == 0 {
+		return
+	}
+	op := &ebiten.DrawTrianglesOptions{ColorScaleMode: ebiten.ColorScaleModePremultipliedAlpha}
+	p.dst.DrawTriangles(p.vs, p.is, p.white, op)
+}
+
+// Dot fills a circle of radius r centred on x, y.
+func (p *Painter) Dot(x, y, r float64, c color.NRGBA) {
+	const n = 16
+	xs, ys := make([]float64, n), make([]float64, n)
+	for i := range n {
+		a := 2 * math.Pi * float64(i) / n
+		xs[i], ys[i] = x+r*math.Cos(a), y+r*math.Sin(a)
+	}
+	p.Polygon(xs, ys, c)
+}
+
 // triangles draws p.vs and p.is in c from the white pixel.
 func (p *Painter) triangles(c color.NRGBA, antialias bool) {
 	if len(p.is) == 0 {

@@ -5,34 +5,50 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"time"
+
+	"nodelife/engine/scenario"
 )
 
-// FieldEvent is what a NumberField's Update did.
+// FieldEvent is what a widget's Update did.
 type FieldEvent int
 
 // Field events. Anything but FieldIdle needs a redraw.
 const (
 	FieldIdle   FieldEvent = iota // nothing
-	FieldEdited                   // the text, caret or selection changed
-	FieldCommit                   // Enter: check and apply the text
-	FieldNudged                   // an arrow key stepped the value: apply the text now
-	FieldCancel                   // Escape: text restored, focus given up
+	FieldEdited                   // the text, caret, selection or list changed
+	FieldCommit                   // Enter, or a pick: check and apply the value
+	FieldNudged                   // an arrow key stepped the value: apply it now
+	FieldCancel                   // Escape: value restored, focus given up
 	FieldNext                     // Tab: commit and move to the next field
 	FieldPrev                     // Shift+Tab: commit and move to the previous field
 )
 
-// maxFieldChars bounds what can be typed into a field.
+// TextMode is what a TextField holds, which decides the characters it takes
+// and what the arrow keys do.
+type TextMode int
+
+// The text modes.
+const (
+	NumberText   TextMode = iota // a number; arrows step it
+	DateText                     // an ISO 8601 date; arrows step a day (Shift: a month)
+	PositionText                 // "latitude, longitude" in degrees
+	ZoneText                     // an IANA time zone name
+)
+
+// maxChars bounds what can be typed into a field of each mode.
+var maxChars = [...]int{NumberText: 24, DateText: 10, PositionText: 32, ZoneText: 40}
+
+// maxFieldChars is the longest number.
 const maxFieldChars = 24
 
-// NumberField is the state of one editable number: its committed value, the
-// text being edited, focus, selection and the reason a value was refused.
-// Drawing is drawNumberField's job; Update only changes state.
-type NumberField struct {
-	Path    string  // JSON path of the value in the scenario
-	Label   string  // short name shown left of the box
-	Unit    string  // shown after the number, in the secondary ink
-	Help    string  // one line under the box
-	Step    float64 // what an arrow key adds or takes; Shift: ten times
+// TextField is the state of one typed value: its committed value, the text
+// being edited, focus, selection and the reason a value was refused.
+// Drawing is drawTextField's job; Update only changes state.
+type TextField struct {
+	Mode    TextMode
+	Unit    string  // shown after the value, in the secondary ink
+	Step    float64 // what an arrow key adds or takes (numbers); Shift: ten times
 	Min     float64 // nudges stop at Min and Max
 	Max     float64
 	Integer bool // whole numbers only
@@ -43,17 +59,11 @@ type NumberField struct {
 	Selected bool   // the whole text is selected: typing replaces it
 	Caret    int    // byte offset of the caret in Text (Text is ASCII)
 	Err      string // why Text was refused; "" if it was not
-	Hover    bool
-
-	Box   Rect // the value box, placed by Form.Layout
-	Row   Rect // label, box and help: the whole row, the click target
-	help  []string
-	label string // Label, shortened to fit if need be
 }
 
 // SetValue sets the committed value; the text follows unless the field is
-// being edited.
-func (f *NumberField) SetValue(v string) {
+// being edited or shows a refused value.
+func (f *TextField) SetValue(v string) {
 	f.Value = v
 	if !f.Focused && f.Err == "" {
 		f.Text = v
@@ -62,37 +72,43 @@ func (f *NumberField) SetValue(v string) {
 }
 
 // Focus gives the field the keyboard with its whole text selected.
-func (f *NumberField) Focus() {
+func (f *TextField) Focus() {
 	f.Focused, f.Selected, f.Caret = true, true, len(f.Text)
 }
 
 // Blur takes the keyboard away.
-func (f *NumberField) Blur() {
+func (f *TextField) Blur() {
 	f.Focused, f.Selected = false, false
 }
 
 // Edited reports whether the text differs from the committed value, so that
 // it has to be committed or cancelled.
-func (f *NumberField) Edited() bool { return f.Text != f.Value }
+func (f *TextField) Edited() bool { return f.Text != f.Value }
 
 // Accept marks the text as committed: Value becomes what the engine now holds
 // (normalized, e.g. "07" → "7") and any error goes away.
-func (f *NumberField) Accept(value string) {
+func (f *TextField) Accept(value string) {
 	f.Value, f.Text, f.Err = value, value, ""
 	f.Caret = len(value)
 }
 
 // Refuse marks the text as refused with the engine's reason.
-func (f *NumberField) Refuse(reason string) {
+func (f *TextField) Refuse(reason string) {
 	f.Err = reason
 	f.Selected = false
+	f.Caret = len(f.Text)
+}
+
+// Revert puts the committed value back and forgets a refusal.
+func (f *TextField) Revert() {
+	f.Text, f.Err = f.Value, ""
 	f.Caret = len(f.Text)
 }
 
 // Update applies the keys and characters of in to a focused field. Clicks are
 // the Form's business. It stops at the first key that ends the edit (commit,
 // cancel, move) and reports it.
-func (f *NumberField) Update(in *Input) FieldEvent {
+func (f *TextField) Update(in *Input) FieldEvent {
 	if !f.Focused {
 		return FieldIdle
 	}
@@ -107,8 +123,7 @@ func (f *NumberField) Update(in *Input) FieldEvent {
 		case KeyEnter:
 			return FieldCommit
 		case KeyEscape:
-			f.Text, f.Err = f.Value, ""
-			f.Caret = len(f.Text)
+			f.Revert()
 			f.Blur()
 			return FieldCancel
 		case KeyTab:
@@ -121,11 +136,9 @@ func (f *NumberField) Update(in *Input) FieldEvent {
 			if k == KeyDown {
 				dir = -1
 			}
-			if in.Shift {
-				dir *= 10
+			if f.nudge(dir, in.Shift) {
+				return FieldNudged
 			}
-			f.nudge(dir)
-			return FieldNudged
 		case KeyBackspace, KeyDelete:
 			switch {
 			case f.Selected:
@@ -167,29 +180,62 @@ func (f *NumberField) Update(in *Input) FieldEvent {
 	return ev
 }
 
-// typeRune inserts r if it can be part of a number. A decimal comma becomes a
-// point.
-func (f *NumberField) typeRune(r rune) bool {
-	if r == ',' {
-		r = '.'
+// typeRune inserts r if the mode takes it; every mode's text is ASCII. In a
+// number a decimal comma becomes a point; a position keeps compass letters.
+func (f *TextField) typeRune(r rune) bool {
+	ok := false
+	switch f.Mode {
+	case NumberText:
+		if r == ',' {
+			r = '.'
+		}
+		ok = strings.ContainsRune("0123456789.-+eE", r)
+	case DateText:
+		ok = strings.ContainsRune("0123456789-", r)
+	case PositionText:
+		if r == '°' { // pasted degree signs go: the text stays ASCII, and degrees are the unit
+			return false
+		}
+		ok = strings.ContainsRune("0123456789.,-+ NSEWnsew", r)
+	case ZoneText:
+		ok = r < 0x80 && (r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || strings.ContainsRune("/_-+", r))
 	}
-	if !strings.ContainsRune("0123456789.-+eE", r) {
+	if !ok {
 		return false
 	}
 	if f.Selected {
 		f.Text, f.Caret, f.Selected = "", 0, false
 	}
-	if len(f.Text) >= maxFieldChars {
+	s := string(r)
+	if len(f.Text)+len(s) > maxChars[f.Mode] {
 		return false
 	}
-	f.Text = f.Text[:f.Caret] + string(r) + f.Text[f.Caret:]
-	f.Caret++
+	f.Text = f.Text[:f.Caret] + s + f.Text[f.Caret:]
+	f.Caret += len(s)
 	return true
 }
 
-// nudge steps the value by dir × Step, from the text if it is a number and
-// from the committed value if not, and keeps it within Min and Max.
-func (f *NumberField) nudge(dir float64) {
+// nudge steps a number by dir × Step (Shift: ten steps) or a date by a day
+// (Shift: a month); other modes do not step. It reports whether it stepped.
+func (f *TextField) nudge(dir float64, shift bool) bool {
+	switch f.Mode {
+	case NumberText:
+		if shift {
+			dir *= 10
+		}
+		f.nudgeNumber(dir)
+	case DateText:
+		f.nudgeDate(int(dir), shift)
+	default:
+		return false
+	}
+	f.Caret, f.Selected = len(f.Text), false
+	return true
+}
+
+// nudgeNumber steps the value by dir × Step, from the text if it is a number
+// and from the committed value if not, and keeps it within Min and Max.
+func (f *TextField) nudgeNumber(dir float64) {
 	v, err := strconv.ParseFloat(strings.TrimSpace(f.Text), 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		v, err = strconv.ParseFloat(f.Value, 64)
@@ -213,7 +259,35 @@ func (f *NumberField) nudge(dir float64) {
 		v = math.Round(v)
 	}
 	f.Text = FormatNumber(v)
-	f.Caret, f.Selected = len(f.Text), false
+}
+
+// nudgeDate steps the date in the text (or the committed one) by dir days,
+// or months with shift, within the scenario format's dates.
+func (f *TextField) nudgeDate(dir int, months bool) {
+	t, err := time.Parse(time.DateOnly, strings.TrimSpace(f.Text))
+	if err != nil {
+		if t, err = time.Parse(time.DateOnly, f.Value); err != nil {
+			return
+		}
+	}
+	if months {
+		// The same day of the next month, or its last day (31 January → 28
+		// February), not Go's normalized 3 March.
+		first := time.Date(t.Year(), t.Month()+time.Month(dir), 1, 0, 0, 0, 0, time.UTC)
+		last := first.AddDate(0, 1, -1).Day()
+		t = first.AddDate(0, 0, min(t.Day(), last)-1)
+	} else {
+		t = t.AddDate(0, 0, dir)
+	}
+	lo, _ := time.Parse(time.DateOnly, scenario.MinDate)
+	hi, _ := time.Parse(time.DateOnly, scenario.MaxDate)
+	if t.Before(lo) {
+		t = lo
+	}
+	if t.After(hi) {
+		t = hi
+	}
+	f.Text = t.Format(time.DateOnly)
 }
 
 // FormatNumber writes v with no more digits than it needs, rounded to 9
@@ -229,41 +303,47 @@ func FormatNumber(v float64) string {
 // Field box padding, CSS px.
 const boxPad = 8
 
-// drawNumberField paints a field from its state: label, value box with the
-// number and its unit, and the help line or, in the error colour, the reason
-// its text was refused.
-func drawNumberField(p *Painter, f *NumberField, th Theme) {
+// controlFrame paints a control's box: its fill and edge from its state.
+func controlFrame(p *Painter, box Rect, hover, focused bool, err string, th Theme) {
 	pal := th.Palette
-	body, small, mono := th.bodyStyle(), th.labelStyle(), th.monoStyle()
-	p.Text(f.label, body, f.Row.X, f.Box.Y+(boxH-body.LineHeight())/2, AlignLeft, pal.Ink)
-
 	fill, edge, edgeW := pal.Panel, pal.Rule, 1.0
 	switch {
-	case f.Err != "":
-		fill, edge, edgeW = pal.ErrorFill, pal.Flat, 1
-	case f.Hover && !f.Focused:
+	case err != "":
+		fill, edge = pal.ErrorFill, pal.Flat
+	case hover && !focused:
 		edge = pal.InkSecondary
 	}
-	if f.Focused {
+	if focused {
 		edge, edgeW = pal.Focus, 2
-		if f.Err != "" {
+		if err != "" {
 			edge = pal.Flat
 		}
 	}
-	p.Fill(f.Box, fill)
-	p.Frame(f.Box, edgeW, edge)
+	p.Fill(box, fill)
+	p.Frame(box, edgeW, edge)
+}
+
+// drawTextField paints the value box of a field from its state: the text (or
+// the refused text) and its unit, selection and caret.
+func drawTextField(p *Painter, f *TextField, box Rect, hover bool, th Theme) {
+	pal := th.Palette
+	small, mono := th.labelStyle(), th.monoStyle()
+	controlFrame(p, box, hover, f.Focused, f.Err, th)
 
 	unitW := 0.0
 	if f.Unit != "" {
 		unitW = p.fonts.Advance(f.Unit, small) + 4
-		p.Text(f.Unit, small, f.Box.Right()-boxPad, f.Box.Y+(boxH-small.LineHeight())/2, AlignRight, pal.InkSecondary)
+		p.Text(f.Unit, small, box.Right()-boxPad, box.Y+(box.H-small.LineHeight())/2, AlignRight, pal.InkSecondary)
 	}
-	room := f.Box.W - 2*boxPad - unitW
+	room := box.W - 2*boxPad - unitW
 	textW := p.fonts.Advance(f.Text, mono)
-	shift := math.Max(textW-room, 0) // long text: show its end
-	tx := f.Box.X + boxPad - shift
-	ty := f.Box.Y + (boxH-mono.LineHeight())/2
-	cp := p.Clip(Rect{f.Box.X + boxPad, f.Box.Y, room, f.Box.H})
+	shift := 0.0
+	if f.Focused {
+		shift = math.Max(textW-room, 0) // long text: show its end while typing
+	}
+	tx := box.X + boxPad - shift
+	ty := box.Y + (box.H-mono.LineHeight())/2
+	cp := p.Clip(Rect{box.X + boxPad, box.Y, room, box.H})
 	if f.Focused && f.Selected && f.Text != "" {
 		cp.Fill(Rect{tx - 1, ty + 1, textW + 2, mono.LineHeight() - 2}, selectionColor(pal))
 	}
@@ -272,12 +352,6 @@ func drawNumberField(p *Painter, f *NumberField, th Theme) {
 		cx := tx + p.fonts.Advance(f.Text[:f.Caret], mono)
 		cp.VLine(cx, ty+2, ty+mono.LineHeight()-2, 1, pal.Ink)
 	}
-
-	c := pal.InkSecondary
-	if f.Err != "" {
-		c = pal.Flat
-	}
-	p.Lines(f.help, small, f.Row.X, f.Box.Bottom()+helpGap, c)
 }
 
 // selectionColor is a light tint of the focus colour behind selected text.

@@ -2,14 +2,14 @@ package ui
 
 import "testing"
 
-func focusedField(text string) *NumberField {
-	f := &NumberField{Path: "node.vision.fps", Unit: "fps", Step: 1, Min: 0, Max: 60}
+func focusedField(text string) *TextField {
+	f := &TextField{Unit: "fps", Step: 1, Min: 0, Max: 60}
 	f.SetValue(text)
 	f.Focus()
 	return f
 }
 
-func TestNumberFieldTypingReplacesSelection(t *testing.T) {
+func TestTextFieldTypingReplacesSelection(t *testing.T) {
 	f := focusedField("5")
 	if !f.Selected {
 		t.Fatal("Focus() did not select the text")
@@ -25,7 +25,7 @@ func TestNumberFieldTypingReplacesSelection(t *testing.T) {
 	}
 }
 
-func TestNumberFieldFiltersCharacters(t *testing.T) {
+func TestTextFieldFiltersCharacters(t *testing.T) {
 	f := focusedField("")
 	f.Update(chars("a2,5 x"))
 	if f.Text != "2.5" {
@@ -37,7 +37,7 @@ func TestNumberFieldFiltersCharacters(t *testing.T) {
 	}
 }
 
-func TestNumberFieldCaretEditing(t *testing.T) {
+func TestTextFieldCaretEditing(t *testing.T) {
 	f := focusedField("1234")
 	f.Update(keys(KeyLeft)) // selection → caret at the start
 	if f.Caret != 0 || f.Selected {
@@ -61,7 +61,7 @@ func TestNumberFieldCaretEditing(t *testing.T) {
 	}
 }
 
-func TestNumberFieldEndingKeys(t *testing.T) {
+func TestTextFieldEndingKeys(t *testing.T) {
 	for _, c := range []struct {
 		name string
 		in   *Input
@@ -81,7 +81,7 @@ func TestNumberFieldEndingKeys(t *testing.T) {
 	}
 }
 
-func TestNumberFieldEscapeRestores(t *testing.T) {
+func TestTextFieldEscapeRestores(t *testing.T) {
 	f := focusedField("5")
 	f.Update(chars("61"))
 	f.Refuse("61 is out of range")
@@ -91,15 +91,15 @@ func TestNumberFieldEscapeRestores(t *testing.T) {
 	}
 }
 
-func TestNumberFieldIgnoresInputWithoutFocus(t *testing.T) {
-	f := &NumberField{Step: 1, Max: 60}
+func TestTextFieldIgnoresInputWithoutFocus(t *testing.T) {
+	f := &TextField{Step: 1, Max: 60}
 	f.SetValue("5")
 	if ev := f.Update(chars("9")); ev != FieldIdle || f.Text != "5" {
 		t.Errorf("unfocused field took input: event %v, Text %q", ev, f.Text)
 	}
 }
 
-func TestNumberFieldNudge(t *testing.T) {
+func TestTextFieldNudge(t *testing.T) {
 	for _, c := range []struct {
 		text    string
 		in      *Input
@@ -118,7 +118,7 @@ func TestNumberFieldNudge(t *testing.T) {
 		{"abc", keys(KeyUp), 1, false, "8"},       // bad text: from the committed value 7
 		{"3", keys(KeyUp), 0.5, true, "4"},        // whole numbers stay whole (3.5 rounds up)
 	} {
-		f := &NumberField{Step: c.step, Min: 0, Max: 60, Integer: c.integer}
+		f := &TextField{Step: c.step, Min: 0, Max: 60, Integer: c.integer}
 		f.SetValue("7")
 		f.Focus()
 		f.Text = c.text
@@ -143,5 +143,58 @@ func TestFormatNumber(t *testing.T) {
 		if got := FormatNumber(c.v); got != c.want {
 			t.Errorf("FormatNumber(%v) = %q, want %q", c.v, got, c.want)
 		}
+	}
+}
+
+func TestTextFieldModesFilterCharacters(t *testing.T) {
+	for _, c := range []struct {
+		mode       TextMode
+		typed, got string
+	}{
+		{DateText, "2027-03-x1", "2027-03-1"},
+		{PositionText, "59.91° N, 10.75° E!", "59.91 N, 10.75 E"},
+		{ZoneText, "America/Los_Angeles ", "America/Los_Angeles"},
+		{NumberText, "1,5", "1.5"},
+	} {
+		f := &TextField{Mode: c.mode}
+		f.Focus()
+		f.Update(chars(c.typed))
+		if f.Text != c.got {
+			t.Errorf("mode %d: typed %q, Text %q, want %q", c.mode, c.typed, f.Text, c.got)
+		}
+	}
+}
+
+func TestTextFieldDateNudge(t *testing.T) {
+	for _, c := range []struct {
+		text string
+		in   *Input
+		want string
+	}{
+		{"2027-03-01", keys(KeyUp), "2027-03-02"},
+		{"2027-03-01", keys(KeyDown), "2027-02-28"},
+		{"2028-02-28", keys(KeyUp), "2028-02-29"},      // a leap day
+		{"2027-01-31", shiftKeys(KeyUp), "2027-02-28"}, // a month on, kept in February
+		{"2027-03-15", shiftKeys(KeyDown), "2027-02-15"},
+		{"2079-12-31", keys(KeyUp), "2079-12-31"}, // the format's last day
+		{"garbled", keys(KeyUp), "2027-01-02"},    // from the committed value
+	} {
+		f := &TextField{Mode: DateText}
+		f.SetValue("2027-01-01")
+		f.Focus()
+		f.Text = c.text
+		if ev := f.Update(c.in); ev != FieldNudged {
+			t.Errorf("%q: event %v, want FieldNudged", c.text, ev)
+		}
+		if f.Text != c.want {
+			t.Errorf("nudge %q (shift %v): %q, want %q", c.text, c.in.Shift, f.Text, c.want)
+		}
+	}
+	// A position does not step.
+	f := &TextField{Mode: PositionText}
+	f.SetValue("59.91, 10.75")
+	f.Focus()
+	if ev := f.Update(keys(KeyUp)); ev != FieldIdle || f.Text != "59.91, 10.75" {
+		t.Errorf("Up in a position: event %v Text %q; want nothing", ev, f.Text)
 	}
 }

@@ -31,6 +31,11 @@ type Palette struct {
 	CautionEdge  color.NRGBA // not text
 	Focus        color.NRGBA // focus ring of a field (not text)
 	ErrorFill    color.NRGBA // a field holding a bad value
+	Harvest      color.NRGBA // harvest bars (not text)
+	Load         color.NRGBA // load bars (not text)
+	Accent       color.NRGBA // energy bars, progress (not text)
+	// The temperature strip: cold at −20 °C, Mild at 20 °C, hot at 45 °C.
+	TempCold, TempMild, TempHot color.NRGBA
 }
 
 // TypeScale is the text sizes in CSS pixels.
@@ -76,6 +81,12 @@ func Light() Theme {
 			CautionEdge:  hex(0xD99A2B),
 			Focus:        hex(0x1F6B72),
 			ErrorFill:    hex(0xFCEBE8),
+			Harvest:      hex(0xD99A2B),
+			Load:         hex(0x5B6770),
+			Accent:       hex(0x2A7F86),
+			TempCold:     hex(0x4B7BB5),
+			TempMild:     hex(0xE9E6DF),
+			TempHot:      hex(0xC0563F),
 		},
 		Type:  defaultType(),
 		Space: defaultSpace(),
@@ -101,6 +112,12 @@ func Dark() Theme {
 			CautionEdge:  hex(0xE8B24E),
 			Focus:        hex(0x5CC4CC),
 			ErrorFill:    hex(0x3A1F1C),
+			Harvest:      hex(0xE8B24E),
+			Load:         hex(0x9AA5AE),
+			Accent:       hex(0x3FA7AF),
+			TempCold:     hex(0x4B7BB5),
+			TempMild:     hex(0x2A2F35),
+			TempHot:      hex(0xC0563F),
 		},
 		Type:  defaultType(),
 		Space: defaultSpace(),

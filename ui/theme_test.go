@@ -26,6 +26,8 @@ func TestTextContrast(t *testing.T) {
 			{"value in a refused box", p.Ink, p.ErrorFill},
 			{"unit in a refused box", p.InkSecondary, p.ErrorFill},
 			{"selected text", p.Ink, selectionColor(p)},
+			{"chosen segment", p.Panel, p.Mean},
+			{"notice text", p.Ink, p.CautionFill},
 		}
 		for _, c := range pairs {
 			if got := Contrast(c.fg, c.bg); got < minContrast {

@@ -12,9 +12,10 @@ import (
 // page is the connection to static/nodelife.js, which defines the public API
 // (window.nodelife) on top of the plain functions registered here: each takes
 // and returns strings, and reports an error as {error: message} so the
-// JavaScript side can throw a real Error.
+// JavaScript side can throw a real Error. page is also the app's ui.Host:
+// autosave, the live summary, downloads and the file picker are the page's.
 type page struct {
-	hooks js.Value // {ready(), fail(message)} from nodelife.js, or undefined
+	hooks js.Value // nodelife.js's hooks (_connect, _ready, _fail, …), or undefined
 }
 
 // connect finds the page's nodelife object and its hooks.
@@ -27,6 +28,47 @@ func connect() *page {
 	return p
 }
 
+// call calls hook name if the page has it.
+func (p *page) call(name string, args ...any) js.Value {
+	if p.hooks.IsUndefined() || p.hooks.Get(name).Type() != js.TypeFunction {
+		return js.Undefined()
+	}
+	return p.hooks.Call(name, args...)
+}
+
+// saved is the scenario the page kept from the last visit, or nil.
+func (p *page) saved() []byte {
+	v := p.call("_saved")
+	if v.Type() != js.TypeString || v.String() == "" {
+		return nil
+	}
+	return []byte(v.String())
+}
+
+// setAside moves the kept scenario out of the way, so a bad one is not
+// read again, and returns where it went.
+func (p *page) setAside() string {
+	v := p.call("_setAside")
+	if v.Type() != js.TypeString {
+		return ""
+	}
+	return v.String()
+}
+
+// Changed keeps the scenario for the next visit and mirrors the answer into
+// the page (ui.Host).
+func (p *page) Changed(scenarioJSON []byte, summary string) {
+	p.call("_changed", string(scenarioJSON), summary)
+}
+
+// Download offers data as a file (ui.Host).
+func (p *page) Download(name, mimeType string, data []byte) {
+	p.call("_download", name, mimeType, string(data))
+}
+
+// PickFile opens the page's file picker (ui.Host).
+func (p *page) PickFile() { p.call("_pick") }
+
 // serve registers the bridge functions for app.
 func (p *page) serve(app *ui.App) {
 	if p.hooks.IsUndefined() {
@@ -34,10 +76,21 @@ func (p *page) serve(app *ui.App) {
 	}
 	bridge := map[string]any{
 		"run": js.FuncOf(func(_ js.Value, args []js.Value) any {
-			return reply(ui.Run([]byte(arg(args))))
+			return reply(ui.Run([]byte(arg(args, 0))))
 		}),
 		"load": js.FuncOf(func(_ js.Value, args []js.Value) any {
-			return reply(app.Load([]byte(arg(args))))
+			return reply(app.Load([]byte(arg(args, 0))))
+		}),
+		"open": js.FuncOf(func(_ js.Value, args []js.Value) any {
+			return reply(nil, app.Open([]byte(arg(args, 0)), arg(args, 1)))
+		}),
+		"paste": js.FuncOf(func(_ js.Value, args []js.Value) any {
+			app.Paste(arg(args, 0))
+			return nil
+		}),
+		"theme": js.FuncOf(func(_ js.Value, args []js.Value) any {
+			app.SetTheme(themeFor(len(args) > 0 && args[0].Truthy()))
+			return nil
 		}),
 		"scenario": js.FuncOf(func(js.Value, []js.Value) any {
 			return reply(app.ScenarioJSON(), nil)
@@ -53,11 +106,7 @@ func (p *page) serve(app *ui.App) {
 }
 
 // ready tells the page the first frame is on screen.
-func (p *page) ready() {
-	if !p.hooks.IsUndefined() {
-		p.hooks.Call("_ready")
-	}
-}
+func (p *page) ready() { p.call("_ready") }
 
 // fail shows err in the page (and the console).
 func (p *page) fail(err error) {
@@ -72,11 +121,11 @@ func (p *page) fail(err error) {
 	doc.Get("body").Call("prepend", div)
 }
 
-func arg(args []js.Value) string {
-	if len(args) == 0 || args[0].Type() != js.TypeString {
+func arg(args []js.Value, i int) string {
+	if len(args) <= i || args[i].Type() != js.TypeString {
 		return ""
 	}
-	return args[0].String()
+	return args[i].String()
 }
 
 func reply(data []byte, err error) any {
@@ -86,10 +135,14 @@ func reply(data []byte, err error) any {
 	return map[string]any{"json": string(data)}
 }
 
-// preferredTheme follows the browser's light or dark preference.
-func preferredTheme() ui.Theme {
+// prefersDark reads the browser's light or dark preference.
+func prefersDark() bool {
 	mm := js.Global().Get("matchMedia")
-	if mm.Type() == js.TypeFunction && js.Global().Call("matchMedia", "(prefers-color-scheme: dark)").Get("matches").Bool() {
+	return mm.Type() == js.TypeFunction && js.Global().Call("matchMedia", "(prefers-color-scheme: dark)").Get("matches").Bool()
+}
+
+func themeFor(dark bool) ui.Theme {
+	if dark {
 		return ui.Dark()
 	}
 	return ui.Light()

@@ -5,14 +5,37 @@
 package main
 
 import (
+	"fmt"
+
 	"github.com/hajimehoshi/ebiten/v2"
 
+	"nodelife/engine/scenario"
 	"nodelife/ui"
 )
 
 func main() {
 	page := connect()
-	app, err := ui.New(ui.Options{Theme: preferredTheme(), OnFirstFrame: page.ready})
+	o := ui.Options{Theme: themeFor(prefersDark()), OnFirstFrame: page.ready, Host: page}
+	// The scenario kept from the last visit; one that no longer opens is set
+	// aside and reported, and the demo shows instead.
+	setAside := func(err error) {
+		where := page.setAside()
+		o.Scenario = nil
+		o.Notice, o.NoticeError = fmt.Sprintf("The scenario kept in this browser could not be opened, so the demo is shown; "+
+			"the old one was set aside (%s). %v", where, err), true
+	}
+	if saved := page.saved(); saved != nil {
+		if _, err := scenario.Parse(saved); err != nil {
+			setAside(err)
+		} else {
+			o.Scenario = saved
+		}
+	}
+	app, err := ui.New(o)
+	if err != nil && o.Scenario != nil {
+		setAside(err)
+		app, err = ui.New(o)
+	}
 	if err != nil {
 		page.fail(err)
 		return
