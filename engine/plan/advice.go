@@ -100,6 +100,9 @@ type Lever struct {
 type AdviceOptions struct {
 	// Progress, when set, is told how many of the runs are done.
 	Progress func(done, total int)
+	// Yield, when set, is called every 30 simulated days inside each run
+	// (sim.Options.Yield), so a page can stay responsive.
+	Yield func()
 }
 
 // r10 is the ISO 3 R10 series of preferred numbers, one decade.
@@ -120,7 +123,7 @@ func panelLadder() []float64 {
 // It runs the simulation many times (the weather draws, the searches, the
 // levers); ctx cancels it between runs.
 func Advise(ctx context.Context, s scenario.Scenario, in Inputs, r Result, o AdviceOptions) (Advice, error) {
-	a := &adviser{ctx: ctx, s: s, in: in, base: r, progress: o.Progress}
+	a := &adviser{ctx: ctx, s: s, in: in, base: r, progress: o.Progress, yield: o.Yield}
 	return a.run()
 }
 
@@ -130,6 +133,7 @@ type adviser struct {
 	in       Inputs
 	base     Result
 	progress func(done, total int)
+	yield    func()
 	done     int
 	total    int
 	planners map[string]*Planner
@@ -157,7 +161,7 @@ func (a *adviser) simulate(s scenario.Scenario, factors []float64) (sim.Result, 
 	if err := p.ensureYear(s); err != nil {
 		return sim.Result{}, err
 	}
-	r := sim.RunOpts(s, p.year, sim.Options{DayFactor: factors})
+	r := sim.RunOpts(s, p.year, sim.Options{DayFactor: factors, Yield: a.yield})
 	return r, a.tick()
 }
 

@@ -46,8 +46,10 @@ func (p *Planner) SetInputs(in Inputs) {
 	p.Inputs, p.year, p.key = in, nil, ""
 }
 
-// yearKey is what a sim.Year depends on.
+// yearKey is what a sim.Year depends on: not the panel's area, which the
+// run scales the table's output by.
 func yearKey(s scenario.Scenario) string {
+	s.Harvest.Panel.AreaCm2 = 0
 	b, err := json.Marshal(struct {
 		Site    scenario.Site
 		Harvest scenario.Harvest

@@ -125,6 +125,9 @@ type Options struct {
 	// local day of the horizon (index 0 is the plan's first day): a drawn
 	// weather year's daily clearness over the monthly mean.
 	DayFactor []float64
+	// Yield, when set, is called after every 30 simulated days, so a caller
+	// sharing one thread with a user interface (WebAssembly) can let it run.
+	Yield func()
 }
 
 // state is everything a run changes, so a day's start can be kept and
@@ -212,6 +215,10 @@ func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 	// Temperature-dependent values, recomputed only when the temperature moves.
 	thermal := cell.NewThermal(chem)
 	r20 := pack.ResistanceOhm(20)
+	panelScale := 1.0 // the table's panel to this scenario's
+	if y.PanelAreaCm2 > 0 {
+		panelScale = s.Harvest.Panel.AreaCm2 / y.PanelAreaCm2
+	}
 	var lastT float64
 	var e stepEnv
 	forget := func() { lastT, lastCond = math.NaN(), load.Conditions{Hour: -1} }
@@ -269,6 +276,9 @@ func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 
 	stepMin := s.Plan.StepMin
 	for di := 0; di < nDays; di++ {
+		if o.Yield != nil && di%30 == 29 {
+			o.Yield()
+		}
 		day, next := dayStarts[di], dayStarts[di+1]
 		flush()
 		snaps[di] = st
@@ -344,7 +354,7 @@ func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 			// from the lights (or daylight outdoors).
 			switch {
 			case y.HarvestW != nil:
-				se.harvestWh = y.HarvestW[idx] * dtH * factor
+				se.harvestWh = y.HarvestW[idx] * dtH * factor * panelScale
 			case indoorCell != nil:
 				se.harvestWh = indoorCell.OutputW(cond.Lux) * dtH
 			}

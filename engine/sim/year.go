@@ -34,9 +34,14 @@ type Year struct {
 	CellTempC  []float64 // the cells' temperature: outdoors, the air plus the sun on the enclosure
 	GHIWm2     []float64 // global horizontal irradiance, W/m²
 	LuxOutdoor []float64 // daylight illuminance on the horizontal, lx
-	// HarvestW is the power a solar panel delivers to the cells' charger, W;
-	// nil without a panel.
-	HarvestW []float64
+	// HarvestW is the power a solar panel of PanelAreaCm2 delivers to the
+	// cells' charger, W; nil without a panel. The output is proportional to
+	// the area (the cell temperature depends on the irradiance, not the
+	// area), so a run scales it to its own panel: one table serves every
+	// panel size, which the sizing search relies on. A table made by hand
+	// with PanelAreaCm2 0 is used as it is.
+	HarvestW     []float64
+	PanelAreaCm2 float64
 }
 
 // tableYear is the leap year whose calendar lays out the rows.
@@ -83,6 +88,7 @@ func NewYear(s scenario.Scenario, w *weather.Series) (*Year, error) {
 	panel := s.Harvest.Kind == scenario.HarvestPanel
 	if panel {
 		y.HarvestW = make([]float64, n)
+		y.PanelAreaCm2 = s.Harvest.Panel.AreaCm2
 	}
 
 	var file *fileSlots

@@ -106,3 +106,27 @@ func TestSolarMonth(t *testing.T) {
 		assert.Equal(t, c.want, solarMonth(c.row, c.minutes), "row %d %+g min", c.row, c.minutes)
 	}
 }
+
+// One table serves every panel size: output is proportional to area.
+func TestPanelTableScalesWithArea(t *testing.T) {
+	s := panelScenario(45, 7, "Europe/Rome")
+	s.Plan.Years = 1
+	y := mustYear(s)
+	for _, area := range []float64{1.25, 40, 630} {
+		v := s
+		v.Harvest.Panel.AreaCm2 = area
+		own := Run(v)           // a table built for this area
+		shared := RunWith(v, y) // the 40 cm² table, scaled
+		assert.InEpsilon(t, own.Ledger.HarvestedWh, shared.Ledger.HarvestedWh, 1e-9, "%g cm²", area)
+		assert.Equal(t, own.Flat, shared.Flat, "%g cm²", area)
+	}
+}
+
+func TestYieldEveryThirtyDays(t *testing.T) {
+	s := scenario.Demo()
+	s.Plan.Start, s.Plan.Years = "2027-01-01", 1
+	calls := 0
+	r := RunOpts(s, mustYear(s), Options{Yield: func() { calls++ }})
+	assert.Equal(t, 365/30, calls)
+	assert.Equal(t, Run(s).Ledger, r.Ledger, "yielding changes nothing")
+}
