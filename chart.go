@@ -3,11 +3,9 @@ package main
 import (
 	"fmt"
 	"io"
-	"os"
 
 	"nodelife/engine/plan"
 	"nodelife/engine/report"
-	"nodelife/engine/scenario"
 )
 
 // cmdChart writes a scenario's state-of-charge chart as SVG, its daily rows
@@ -20,16 +18,9 @@ func cmdChart(args []string, stdin io.Reader, stdout io.Writer) error {
 	swapsCSV := fs.Bool("swaps-csv", false, "the swaps as CSV")
 	width := fs.Int("width", report.DefaultWidth, "the chart's width, px")
 	height := fs.Int("height", report.DefaultHeight, "the chart's height, px")
-	// Accept the flags after the file name too, as plan does.
-	var files []string
-	for len(args) > 0 {
-		if err := parseFlags(fs, args); err != nil {
-			return err
-		}
-		args = fs.Args()
-		if len(args) > 0 {
-			files, args = append(files, args[0]), args[1:]
-		}
+	files, err := fileArgs(fs, args)
+	if err != nil {
+		return err
 	}
 	formats := 0
 	for _, on := range []bool{*asSVG, *asCSV, *swapsCSV} {
@@ -49,25 +40,9 @@ func cmdChart(args []string, stdin io.Reader, stdout io.Writer) error {
 	if len(files) != 1 {
 		return usageError{"chart: give one scenario file (\"-\" reads standard input); `nodelife demo` prints an example"}
 	}
-	name := files[0]
-	var data []byte
-	var err error
-	if name == "-" {
-		name = "standard input"
-		data, err = io.ReadAll(stdin)
-	} else {
-		data, err = os.ReadFile(name)
-	}
+	s, in, name, err := loadScenario(files[0], stdin)
 	if err != nil {
-		return usageError{err.Error()}
-	}
-	s, err := scenario.Parse(data)
-	if err != nil {
-		return usageError{prefixLines(name, err)}
-	}
-	in, err := readInputs(s, name, files[0] == "-")
-	if err != nil {
-		return usageError{prefixLines(name, err)}
+		return err
 	}
 	r, err := plan.RunWith(s, in)
 	if err != nil {

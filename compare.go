@@ -19,16 +19,9 @@ import (
 func cmdCompare(args []string, stdout io.Writer) error {
 	fs := newFlags("compare")
 	asJSON := fs.Bool("json", false, "print the comparison as JSON")
-	// Accept the flag anywhere among the file names, as plan does.
-	var files []string
-	for len(args) > 0 {
-		if err := parseFlags(fs, args); err != nil {
-			return err
-		}
-		args = fs.Args()
-		if len(args) > 0 {
-			files, args = append(files, args[0]), args[1:]
-		}
+	files, err := fileArgs(fs, args)
+	if err != nil {
+		return err
 	}
 	if n := len(files); n < plan.MinOptions || n > plan.MaxOptions {
 		return usageError{fmt.Sprintf("compare: give %d to %d scenario files, not %d; `nodelife demo` prints an example",

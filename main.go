@@ -129,41 +129,60 @@ func parseFlags(fs *flag.FlagSet, args []string) error {
 	return nil
 }
 
-func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
-	fs := newFlags("plan")
-	asJSON := fs.Bool("json", false, "print the result as JSON")
-	fast := fs.Bool("fast", false, "skip the advice (weather draws, sizing, levers)")
-	// Accept the flag after the file name too: nodelife plan FILE --json.
+// fileArgs parses flags placed anywhere among the file names (nodelife
+// plan FILE --json as well as nodelife plan --json FILE) and returns the
+// file names.
+func fileArgs(fs *flag.FlagSet, args []string) ([]string, error) {
 	var files []string
 	for len(args) > 0 {
 		if err := parseFlags(fs, args); err != nil {
-			return err
+			return nil, err
 		}
 		args = fs.Args()
 		if len(args) > 0 {
 			files, args = append(files, args[0]), args[1:]
 		}
 	}
-	if len(files) != 1 {
-		return usageError{"plan: give one scenario file (\"-\" reads standard input); `nodelife demo` prints an example"}
-	}
-	name := files[0]
+	return files, nil
+}
+
+// loadScenario reads and parses a scenario file ("-": standard input) and
+// the files it names. Bad input comes back as a usageError with one
+// "FILE: path: problem" line per problem; name is how the file is called in
+// messages.
+func loadScenario(file string, stdin io.Reader) (s scenario.Scenario, in plan.Inputs, name string, err error) {
+	name = file
 	var data []byte
-	var err error
-	if name == "-" {
+	if file == "-" {
 		name = "standard input"
 		data, err = io.ReadAll(stdin)
 	} else {
-		data, err = os.ReadFile(name)
+		data, err = os.ReadFile(file)
 	}
 	if err != nil {
-		return usageError{err.Error()}
+		return s, in, name, usageError{err.Error()}
 	}
-	s, err := scenario.Parse(data)
+	if s, err = scenario.Parse(data); err != nil {
+		return s, in, name, usageError{prefixLines(name, err)}
+	}
+	if in, err = readInputs(s, name, file == "-"); err != nil {
+		return s, in, name, usageError{prefixLines(name, err)}
+	}
+	return s, in, name, nil
+}
+
+func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
+	fs := newFlags("plan")
+	asJSON := fs.Bool("json", false, "print the result as JSON")
+	fast := fs.Bool("fast", false, "skip the advice (weather draws, sizing, levers)")
+	files, err := fileArgs(fs, args)
 	if err != nil {
-		return usageError{prefixLines(name, err)}
+		return err
 	}
-	in, err := readInputs(s, name, files[0] == "-")
+	if len(files) != 1 {
+		return usageError{"plan: give one scenario file (\"-\" reads standard input); `nodelife demo` prints an example"}
+	}
+	s, in, name, err := loadScenario(files[0], stdin)
 	if err != nil {
 		return err
 	}
