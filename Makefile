@@ -51,9 +51,10 @@ test-deps:
 	  apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq $(TESTPKGS) >/dev/null; \
 	fi
 
-## bench: engine benchmarks
-bench:
+## bench: engine benchmarks, then the app's in headless Chromium (make test's packages)
+bench: test-deps wasm
 	$(GO) test -run '^$$' -bench . -benchmem ./engine/...
+	$(GO) test -run '^$$' -bench . -benchtime 3x ./wasm/
 
 ## schema: rewrite the published JSON Schema from the field table
 schema:

@@ -3,6 +3,10 @@
 //   await nodelife.ready          resolves once the app has drawn its first frame
 //   nodelife.run(scenario)        -> result object (as `nodelife plan --json`);
 //                                    throws an Error with the engine's message
+//   nodelife.run(scenario, {advice: false})
+//                                 -> the answer without the advice (as
+//                                    `nodelife plan --json --fast`): one
+//                                    simulation instead of many
 //   nodelife.load(scenario)       -> Promise of the result; shows the scenario,
 //                                    or rejects and keeps the current one
 //   nodelife.scenario()           -> the current scenario (a full scenario file)
@@ -11,7 +15,13 @@
 //   nodelife.addEventListener("change", e => …)
 //                                 after every change of the scenario or its
 //                                 answer; e.detail.summary is the answer as text
-//   nodelife.debug()              -> counters and rectangles, for tests
+//   nodelife.debug()              -> counters and rectangles, for tests;
+//                                    .redraw times the last change from its
+//                                    commit to its frame
+//
+// Performance marks (performance.getEntriesByName): "nodelife-instantiated"
+// once the WebAssembly module is fetched and compiled, "nodelife-ready" at
+// the first frame; both in ms from the start of the page's navigation.
 //
 // A scenario is a JSON string or an object. See embed-example.html.
 //
@@ -50,6 +60,10 @@
     }
     console.error("nodelife: " + message);
     settle.reject(new Error(message));
+  }
+
+  function mark(name) {
+    if (window.performance && performance.mark) performance.mark(name);
   }
 
   function text(scenario) {
@@ -152,7 +166,17 @@
 
   const api = {
     ready,
-    run(scenario) { return call("run", text(scenario)); },
+    run(scenario, options) {
+      let advice = true;
+      if (options !== undefined && options !== null) {
+        if (typeof options !== "object") throw new TypeError("nodelife.run: options must be an object, such as {advice: false}");
+        if (options.advice !== undefined) {
+          if (typeof options.advice !== "boolean") throw new TypeError("nodelife.run: options.advice must be true or false");
+          advice = options.advice;
+        }
+      }
+      return call("run", text(scenario), advice);
+    },
     load(scenario) {
       try {
         return Promise.resolve(call("load", text(scenario)));
@@ -172,6 +196,7 @@
     _ready: {
       value: () => {
         if (status) status.hidden = true;
+        mark("nodelife-ready");
         settle.resolve();
       },
     },
@@ -257,6 +282,7 @@
         throw new Error(`nodelife.wasm: ${response.status} ${response.statusText}${why ? ": " + why : ""}`);
       }
       instance = await instantiate(response, go.importObject);
+      mark("nodelife-instantiated");
     } catch (e) {
       fail("Loading the app failed. " + e.message);
       return;

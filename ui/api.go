@@ -5,20 +5,34 @@ import (
 	"encoding/json"
 	"fmt"
 	"strings"
+	"time"
 
 	"nodelife/engine/plan"
 	"nodelife/engine/scenario"
 )
 
-// Run plans a scenario file with its advice and returns the result as JSON:
-// the same value `nodelife plan --json` prints for the file. A bad file returns the
-// engine's error, whose text is what the command line prints.
-func Run(data []byte) ([]byte, error) {
+// RunOptions choose what Run works out. The zero value is the whole plan.
+type RunOptions struct {
+	// NoAdvice leaves the advice out, as `nodelife plan --fast` does: one
+	// simulation instead of the advice's many. Default false.
+	NoAdvice bool
+}
+
+// Run plans a scenario file and returns the result as JSON: the same value
+// `nodelife plan --json` prints for the file (`plan --json --fast` with
+// o.NoAdvice). A bad file returns the engine's error, whose text is what the
+// command line prints.
+func Run(data []byte, o RunOptions) ([]byte, error) {
 	s, err := scenario.Parse(data)
 	if err != nil {
 		return nil, err
 	}
-	r, err := plan.Plan(context.Background(), s, plan.Inputs{}, plan.AdviceOptions{})
+	var r plan.Result
+	if o.NoAdvice {
+		r, err = plan.RunWith(s, plan.Inputs{})
+	} else {
+		r, err = plan.Plan(context.Background(), s, plan.Inputs{}, plan.AdviceOptions{})
+	}
 	if err != nil {
 		return nil, err
 	}
@@ -54,6 +68,7 @@ func (a *App) Open(data []byte, name string) error {
 
 // open makes data the scenario. Call with a.mu held.
 func (a *App) open(data []byte) error {
+	a.redraw.commit(time.Now())
 	s, err := scenario.Parse(data)
 	if err != nil {
 		return err
@@ -159,6 +174,9 @@ type Debug struct {
 	Dismiss Rect   `json:"dismiss"` // the notice's dismiss button
 	Hover   string `json:"hover"`   // the date of the chart's read-out, or ""
 	Chart   Rect   `json:"chart"`   // the hover area: state of charge down to the bars
+	// Redraw is how long the last change took from its commit to the
+	// screen, for the browser benchmarks.
+	Redraw Redraw `json:"redraw"`
 }
 
 // Debug reports the app's state.
@@ -214,6 +232,7 @@ func (a *App) Debug() Debug {
 	if h := a.page.hover; h.Day >= 0 && h.Day < len(a.res.Daily) {
 		d.Hover = a.res.Daily[h.Day].Date
 	}
+	d.Redraw = a.redraw.last
 	d.Chart = a.page.chart.HoverArea()
 	if a.page.Mode == Narrow {
 		d.Chart = intersect(d.Chart, a.page.Side)

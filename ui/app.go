@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"runtime/debug"
 	"sync"
+	"time"
 
 	"github.com/hajimehoshi/ebiten/v2"
 
@@ -78,7 +79,8 @@ type App struct {
 	onFirst     func()
 	drawn       bool
 	stats       Stats
-	failure     error // a panic caught in Draw, returned by the next Update
+	redraw      redrawClock // the last change from commit to frame
+	failure     error       // a panic caught in Draw, returned by the next Update
 	cursor      ebiten.CursorShapeType
 	host        Host
 	outbox      []func() // calls to the host, made after the lock is let go
@@ -116,6 +118,7 @@ func New(o Options) (*App, error) {
 		notice: o.Notice, noticeErr: o.NoticeError, hoverStale: true}
 	a.mouseX, a.mouseY = -1, -1
 	a.form = NewForm(s)
+	a.redraw.commit(time.Now())
 	r, err := a.planner.Run(s)
 	if err != nil {
 		return nil, err
@@ -136,6 +139,7 @@ func (a *App) setScenario(s scenario.Scenario, r plan.Result) {
 	}
 	a.wantAdvice()
 	a.layout()
+	a.redraw.computed(a.stats.Runs, time.Now())
 }
 
 // remarshal writes the current result as JSON.
@@ -289,6 +293,7 @@ func (a *App) hover(x, y float64) {
 // returns the engine's reason for refusing it, or "". A slider's drag is one
 // step of the history, recorded when it ends.
 func (a *App) apply(e Edit) string {
+	a.redraw.commit(time.Now())
 	s, err := applyEdit(a.scen, e)
 	if err != nil {
 		return reason(err, e.Path)
@@ -338,6 +343,7 @@ func (a *App) undo(redo bool) {
 	if !ok {
 		return
 	}
+	a.redraw.commit(time.Now())
 	r, err := a.planner.Run(s)
 	if err != nil {
 		a.setNotice("That step cannot be shown: "+err.Error(), true)
@@ -436,6 +442,7 @@ func (a *App) Draw(screen *ebiten.Image) {
 		}
 		a.dirty = false
 		a.stats.Frames++
+		a.redraw.drew(a.stats.Frames, time.Now())
 		first = !a.drawn
 		a.drawn = true
 	}()

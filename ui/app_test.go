@@ -126,22 +126,40 @@ func TestAppNudgeRecomputes(t *testing.T) {
 }
 
 func TestRunMatchesTheEngine(t *testing.T) {
-	got, err := Run(scenario.DemoJSON())
-	if err != nil {
-		t.Fatal(err)
-	}
 	full, err := plan.Plan(context.Background(), scenario.Demo(), plan.Inputs{}, plan.AdviceOptions{})
 	if err != nil {
 		t.Fatal(err)
 	}
-	want, _ := json.Marshal(full)
-	if !bytes.Equal(got, want) {
-		t.Error("Run(demo) differs from json.Marshal(plan.Plan(demo)), the command line's answer")
+	fast, err := plan.RunWith(scenario.Demo(), plan.Inputs{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		o    RunOptions
+		want plan.Result
+		what string // the command line's equivalent
+	}{
+		{RunOptions{}, full, "plan --json"},
+		{RunOptions{NoAdvice: true}, fast, "plan --json --fast"},
+	} {
+		got, err := Run(scenario.DemoJSON(), c.o)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want, _ := json.Marshal(c.want)
+		if !bytes.Equal(got, want) {
+			t.Errorf("Run(demo, %+v) differs from `nodelife %s`", c.o, c.what)
+		}
+		if hasAdvice := bytes.Contains(got, []byte(`"advice":{`)); hasAdvice == c.o.NoAdvice {
+			t.Errorf("Run(demo, %+v): advice present %v", c.o, hasAdvice)
+		}
 	}
 	bad := demoWith(t, "cells", "capacity_mah", -5)
 	_, want2 := scenario.Parse(bad)
-	if _, err := Run(bad); err == nil || want2 == nil || err.Error() != want2.Error() {
-		t.Errorf("Run(bad) error %v, want the engine's %v", err, want2)
+	for _, o := range []RunOptions{{}, {NoAdvice: true}} {
+		if _, err := Run(bad, o); err == nil || want2 == nil || err.Error() != want2.Error() {
+			t.Errorf("Run(bad, %+v) error %v, want the engine's %v", o, err, want2)
+		}
 	}
 }
 

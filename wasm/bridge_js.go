@@ -76,7 +76,9 @@ func (p *page) serve(app *ui.App) {
 	}
 	bridge := map[string]any{
 		"run": js.FuncOf(func(_ js.Value, args []js.Value) any {
-			return reply(ui.Run([]byte(arg(args, 0))))
+			// The second argument is false for the answer without the advice.
+			noAdvice := len(args) > 1 && args[1].Type() == js.TypeBoolean && !args[1].Bool()
+			return reply(ui.Run([]byte(arg(args, 0)), ui.RunOptions{NoAdvice: noAdvice}))
 		}),
 		"load": js.FuncOf(func(_ js.Value, args []js.Value) any {
 			return reply(app.Load([]byte(arg(args, 0))))

@@ -26,7 +26,7 @@ import (
 )
 
 // buildCommand builds the command line tool into a temporary folder.
-func buildCommand(t *testing.T) string {
+func buildCommand(t testing.TB) string {
 	t.Helper()
 	bin := filepath.Join(t.TempDir(), "nodelife")
 	cmd := exec.Command("go", "build", "-o", bin, "..")
@@ -38,7 +38,7 @@ func buildCommand(t *testing.T) string {
 }
 
 // serveStatic serves ../static on a free loopback port until stop.
-func serveStatic(t *testing.T) (url string, stop func()) {
+func serveStatic(t testing.TB) (url string, stop func()) {
 	t.Helper()
 	ln, err := net.Listen("tcp", "127.0.0.1:0")
 	if err != nil {
@@ -52,7 +52,7 @@ func serveStatic(t *testing.T) (url string, stop func()) {
 
 // startBrowser starts Chromium with a fresh profile and returns a context
 // bounded by testTimeout.
-func startBrowser(t *testing.T) context.Context {
+func startBrowser(t testing.TB) context.Context {
 	t.Helper()
 	profile, err := os.MkdirTemp("", "nodelife-chromium-")
 	if err != nil {
@@ -87,7 +87,7 @@ func startBrowser(t *testing.T) context.Context {
 }
 
 // open loads url in a w × h window at scale and waits for the first frame.
-func open(t *testing.T, ctx context.Context, url string, w, h int64, scale float64) {
+func open(t testing.TB, ctx context.Context, url string, w, h int64, scale float64) {
 	t.Helper()
 	if _, err := chromedp.Run(ctx, chromedp.EmulateViewport(w, h, chromedp.EmulateScale(scale))); err != nil {
 		t.Fatal(err)
@@ -105,7 +105,7 @@ func open(t *testing.T, ctx context.Context, url string, w, h int64, scale float
 }
 
 // resize changes the window and waits until the app has drawn it.
-func resize(t *testing.T, ctx context.Context, w, h int64) {
+func resize(t testing.TB, ctx context.Context, w, h int64) {
 	t.Helper()
 	if _, err := chromedp.Run(ctx, chromedp.EmulateViewport(w, h)); err != nil {
 		t.Fatal(err)
@@ -122,12 +122,12 @@ func eval[T any](ctx context.Context, limit time.Duration, js string) (T, error)
 }
 
 // waitFor polls a JavaScript condition until it holds.
-func waitFor(t *testing.T, ctx context.Context, cond, what string) {
+func waitFor(t testing.TB, ctx context.Context, cond, what string) {
 	t.Helper()
 	waitLong(t, ctx, stepTimeout, cond, what)
 }
 
-func waitLong(t *testing.T, ctx context.Context, limit time.Duration, cond, what string) {
+func waitLong(t testing.TB, ctx context.Context, limit time.Duration, cond, what string) {
 	t.Helper()
 	c, cancel := context.WithTimeout(ctx, limit)
 	defer cancel()
@@ -184,7 +184,7 @@ type appDebug struct {
 	Chart  rect   `json:"chart"`
 }
 
-func debugState(t *testing.T, ctx context.Context) appDebug {
+func debugState(t testing.TB, ctx context.Context) appDebug {
 	t.Helper()
 	d, err := eval[appDebug](ctx, stepTimeout, `nodelife.debug()`)
 	if err != nil {
@@ -194,7 +194,7 @@ func debugState(t *testing.T, ctx context.Context) appDebug {
 }
 
 // drawn waits until the app has drawn a frame after this moment.
-func drawn(t *testing.T, ctx context.Context) {
+func drawn(t testing.TB, ctx context.Context) {
 	t.Helper()
 	d := debugState(t, ctx)
 	waitFor(t, ctx, fmt.Sprintf(`nodelife.debug().ticks > %d + 1`, d.Ticks), "two more ticks")
@@ -210,7 +210,7 @@ func dispatchMouse(ctx context.Context, ev input.DispatchMouseEventParams) error
 // mouse dispatches one left-button event and waits until the app has counted
 // it: ebiten samples the button once a tick, so a release sent in the same
 // tick as its press would hide the press.
-func mouse(t *testing.T, ctx context.Context, typ input.DispatchMouseEventType, x, y float64, counter string) {
+func mouse(t testing.TB, ctx context.Context, typ input.DispatchMouseEventType, x, y float64, counter string) {
 	t.Helper()
 	before, err := eval[int64](ctx, stepTimeout, `nodelife.debug().`+counter)
 	if err != nil {
@@ -227,7 +227,7 @@ func mouse(t *testing.T, ctx context.Context, typ input.DispatchMouseEventType, 
 }
 
 // click presses and releases the left button on the centre of r.
-func click(t *testing.T, ctx context.Context, r rect) {
+func click(t testing.TB, ctx context.Context, r rect) {
 	t.Helper()
 	x, y := r.center()
 	mouse(t, ctx, input.DispatchMouseEventTypeMousePressed, x, y, "mouse_presses")
@@ -236,7 +236,7 @@ func click(t *testing.T, ctx context.Context, r rect) {
 
 // move moves the pointer (with the left button held if held) and waits for
 // the app's next tick.
-func move(t *testing.T, ctx context.Context, x, y float64, held bool) {
+func move(t testing.TB, ctx context.Context, x, y float64, held bool) {
 	t.Helper()
 	ticks := debugState(t, ctx).Ticks
 	ev := input.DispatchMouseEventParams{Type: input.DispatchMouseEventTypeMouseMoved, X: x, Y: y}
@@ -250,7 +250,7 @@ func move(t *testing.T, ctx context.Context, x, y float64, held bool) {
 }
 
 // wheel turns the mouse wheel at x, y by dy CSS px (down is positive).
-func wheel(t *testing.T, ctx context.Context, x, y, dy float64) {
+func wheel(t testing.TB, ctx context.Context, x, y, dy float64) {
 	t.Helper()
 	move(t, ctx, x, y, false)
 	ticks := debugState(t, ctx).Ticks
@@ -265,7 +265,7 @@ func wheel(t *testing.T, ctx context.Context, x, y, dy float64) {
 
 // scrollInto turns the wheel over the input column until the input at path
 // is in view.
-func scrollInto(t *testing.T, ctx context.Context, path string) rect {
+func scrollInto(t testing.TB, ctx context.Context, path string) rect {
 	t.Helper()
 	for range 12 {
 		d := debugState(t, ctx)
@@ -295,7 +295,7 @@ func hasSlider(path string) bool {
 
 // key presses a special key: key down, wait until the app has handled it,
 // key up, wait for the next tick.
-func key(t *testing.T, ctx context.Context, name, code string, vk int64) {
+func key(t testing.TB, ctx context.Context, name, code string, vk int64) {
 	t.Helper()
 	chord(t, ctx, 0, name, code, vk)
 }
@@ -308,7 +308,7 @@ const (
 
 // chord holds the modifiers in mods (as real key presses, which ebiten
 // reads, in turn), presses the key, and lets go of everything in reverse.
-func chord(t *testing.T, ctx context.Context, mods int64, name, code string, vk int64) {
+func chord(t testing.TB, ctx context.Context, mods int64, name, code string, vk int64) {
 	t.Helper()
 	type k struct {
 		key, code string
@@ -342,13 +342,10 @@ func chord(t *testing.T, ctx context.Context, mods int64, name, code string, vk 
 
 // press dispatches one key event and waits for the app: until it counts a
 // special key (counted), else for its next tick.
-func press(t *testing.T, ctx context.Context, ev input.DispatchKeyEventParams, counted bool) {
+func press(t testing.TB, ctx context.Context, ev input.DispatchKeyEventParams, counted bool) {
 	t.Helper()
 	d := debugState(t, ctx)
-	if err := chromedp.Do(ctx, chromedp.Func(func(ctx context.Context, tg *chromedp.Target) error {
-		_, err := cdp.Call(ctx, tg, input.DispatchKeyEvent, ev)
-		return err
-	})); err != nil {
+	if err := dispatchKey(ctx, ev); err != nil {
 		t.Fatal(err)
 	}
 	if counted {
@@ -358,7 +355,7 @@ func press(t *testing.T, ctx context.Context, ev input.DispatchKeyEventParams, c
 	waitFor(t, ctx, fmt.Sprintf(`nodelife.debug().ticks > %d`, d.Ticks), "a tick after "+string(ev.Type)+" "+ev.Key)
 }
 
-func screenshot(t *testing.T, ctx context.Context, name string) {
+func screenshot(t testing.TB, ctx context.Context, name string) {
 	t.Helper()
 	png, err := chromedp.Run(ctx, chromedp.CaptureScreenshot())
 	if err != nil {
@@ -386,7 +383,7 @@ func jsString(s string) string {
 	return string(q)
 }
 
-func decode(t *testing.T, data []byte) any {
+func decode(t testing.TB, data []byte) any {
 	t.Helper()
 	var v any
 	if err := json.Unmarshal(data, &v); err != nil {
@@ -440,7 +437,7 @@ func keysOf(v any) []string {
 
 // demoWith returns the demo scenario file with values replaced: path
 // "cells.capacity_mah" and the like, value any JSON value.
-func demoWith(t *testing.T, values map[string]any) []byte {
+func demoWith(t testing.TB, values map[string]any) []byte {
 	t.Helper()
 	var m map[string]any
 	if err := json.Unmarshal(scenario.DemoJSON(), &m); err != nil {

@@ -81,6 +81,32 @@ func TestBrowser(t *testing.T) {
 		}
 	})
 
+	t.Run("run without the advice matches plan --json --fast", func(t *testing.T) {
+		out, err := exec.Command(cli, "plan", "--json", "--fast", demoFile).Output()
+		if err != nil {
+			t.Fatalf("nodelife plan --json --fast: %v", err)
+		}
+		want := decode(t, out)
+		if _, ok := want.(map[string]any)["advice"]; ok {
+			t.Fatal("`plan --fast` gave advice: the test expects none")
+		}
+		demo := jsString(string(scenario.DemoJSON()))
+		got, err := eval[string](ctx, stepTimeout, `JSON.stringify(nodelife.run(`+demo+`, {advice: false}))`)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if path, ok := firstDifference(decode(t, []byte(got)), want, "result"); !ok {
+			t.Errorf("nodelife.run(demo, {advice: false}) differs from `nodelife plan --json --fast` at %s", path)
+		}
+		thrown, err := eval[string](ctx, stepTimeout, `(() => {
+			try { nodelife.run(`+demo+`, {advice: "no"}); return "no error"; }
+			catch (e) { return e.name + ": " + e.message; }
+		})()`)
+		if err != nil || !strings.HasPrefix(thrown, "TypeError: nodelife.run: options.advice") {
+			t.Errorf(`run(demo, {advice: "no"}) threw %q (%v), want a TypeError about options.advice`, thrown, err)
+		}
+	})
+
 	t.Run("bad input is refused with the engine's message", func(t *testing.T) {
 		bad := demoWith(t, map[string]any{"cells.capacity_mah": -5})
 		badFile := filepath.Join(dir, "bad.json")
