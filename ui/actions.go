@@ -34,6 +34,8 @@ func (a *App) act(id string) {
 	case "export-svg":
 		svg := report.SVG(a.res, report.SVGOptions{ReservePct: a.scen.Plan.ReservePct})
 		a.download(fileName(a.scen.Name, "-chart.svg"), "image/svg+xml", svg)
+	case "export-png":
+		a.wantPNG, a.dirty = true, true // painted and read back in the next Draw
 	case "export-daily":
 		a.download(fileName(a.scen.Name, "-daily.csv"), "text/csv", report.DailyCSV(a.res))
 	case "export-swaps":
@@ -45,6 +47,7 @@ func (a *App) act(id string) {
 var exportItems = []Option{
 	{Value: "export-json", Label: "Result", Detail: "JSON, as the command line gives it"},
 	{Value: "export-svg", Label: "Chart", Detail: "SVG, for print and slides"},
+	{Value: "export-png", Label: "Chart picture", Detail: "PNG, as sharp as the screen"},
 	{Value: "export-daily", Label: "Daily rows", Detail: "CSV"},
 	{Value: "export-swaps", Label: "Swap dates", Detail: "CSV"},
 }

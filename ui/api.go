@@ -174,6 +174,7 @@ type Debug struct {
 	Dismiss Rect   `json:"dismiss"` // the notice's dismiss button
 	Hover   string `json:"hover"`   // the date of the chart's read-out, or ""
 	Chart   Rect   `json:"chart"`   // the hover area: state of charge down to the bars
+	Panel   Rect   `json:"panel"`   // the chart's whole panel, as the PNG export paints it
 	// Redraw is how long the last change took from its commit to the
 	// screen, for the browser benchmarks.
 	Redraw Redraw `json:"redraw"`
@@ -234,6 +235,7 @@ func (a *App) Debug() Debug {
 	}
 	d.Redraw = a.redraw.last
 	d.Chart = a.page.chart.HoverArea()
+	d.Panel = a.page.Chart
 	if a.page.Mode == Narrow {
 		d.Chart = intersect(d.Chart, a.page.Side)
 	}

@@ -84,6 +84,7 @@ type App struct {
 	cursor      ebiten.CursorShapeType
 	host        Host
 	outbox      []func() // calls to the host, made after the lock is let go
+	wantPNG     bool     // the chart is to be exported as a PNG at the next Draw
 	pasted      []rune
 	tick        chan struct{} // closed at the next tick, for the advice's pacing
 }
@@ -432,6 +433,10 @@ func (a *App) Draw(screen *ebiten.Image) {
 		}
 		if a.white == nil {
 			a.white = newWhitePixel()
+		}
+		if a.wantPNG {
+			a.wantPNG = false
+			a.exportChartPNG()
 		}
 		p := NewPainter(screen, a.scale, a.fonts, a.white)
 		drawPage(p, &a.page, a.theme)

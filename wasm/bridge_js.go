@@ -61,9 +61,12 @@ func (p *page) Changed(scenarioJSON []byte, summary string) {
 	p.call("_changed", string(scenarioJSON), summary)
 }
 
-// Download offers data as a file (ui.Host).
+// Download offers data as a file (ui.Host). The bytes go over as a
+// Uint8Array, so binary files (the chart's PNG) arrive unchanged.
 func (p *page) Download(name, mimeType string, data []byte) {
-	p.call("_download", name, mimeType, string(data))
+	body := js.Global().Get("Uint8Array").New(len(data))
+	js.CopyBytesToJS(body, data)
+	p.call("_download", name, mimeType, body)
 }
 
 // PickFile opens the page's file picker (ui.Host).

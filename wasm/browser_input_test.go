@@ -182,6 +182,7 @@ type appDebug struct {
 	Notice string `json:"notice"`
 	Hover  string `json:"hover"`
 	Chart  rect   `json:"chart"`
+	Panel  rect   `json:"panel"` // the chart's whole panel
 }
 
 func debugState(t testing.TB, ctx context.Context) appDebug {

@@ -3,8 +3,11 @@
 package main
 
 import (
+	"bytes"
 	"context"
 	"fmt"
+	"image/png"
+	"math"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -386,7 +389,7 @@ func TestBrowser(t *testing.T) {
 		}
 		d := debugState(t, ctx)
 		click(t, ctx, d.Buttons["save"])
-		for _, item := range []string{"export-json", "export-svg"} {
+		for _, item := range []string{"export-json", "export-svg", "export-png"} {
 			click(t, ctx, d.Buttons["export"])
 			waitFor(t, ctx, `!!nodelife.debug().menu`, "the export menu")
 			menu, err := eval[map[string]rect](ctx, stepTimeout, `nodelife.debug().menu`)
@@ -400,10 +403,12 @@ func TestBrowser(t *testing.T) {
 			}
 			click(t, ctx, menu[item])
 		}
-		files := waitFiles(t, dl, 3)
-		var saved, exported, svg []byte
+		files := waitFiles(t, dl, 4)
+		var saved, exported, svg, pic []byte
 		for name, data := range files {
 			switch {
+			case strings.HasSuffix(name, "-chart.png"):
+				pic = data
 			case strings.HasSuffix(name, "-result.json"):
 				exported = data
 			case strings.HasSuffix(name, "-chart.svg"):
@@ -421,6 +426,7 @@ func TestBrowser(t *testing.T) {
 		if !strings.Contains(string(exported), `"format":"nodelife.result/1"`) {
 			t.Errorf("the exported result starts %.60q", exported)
 		}
+		checkChartPNG(t, pic, d, "browser-export-chart-1280x720")
 	})
 
 	t.Run("a reload finds the autosaved scenario", func(t *testing.T) {
@@ -469,6 +475,23 @@ func TestBrowser(t *testing.T) {
 		wheel(t, ctx, d.Chart.X+d.Chart.W/2, 400, 600)
 		drawn(t, ctx)
 		screenshot(t, ctx, "browser-scrolled-760x900@2x")
+		// The chart's PNG is in device pixels, and whole though scrolled.
+		dl := t.TempDir()
+		if _, err := chromedp.CallBrowser(ctx, browser.SetDownloadBehavior, browser.SetDownloadBehaviorParams{
+			Behavior: browser.SetDownloadBehaviorBehaviorAllow, DownloadPath: dl}); err != nil {
+			t.Fatal(err)
+		}
+		d = debugState(t, ctx)
+		click(t, ctx, d.Buttons["export"])
+		waitFor(t, ctx, `!!nodelife.debug().menu`, "the export menu")
+		menu, err := eval[map[string]rect](ctx, stepTimeout, `nodelife.debug().menu`)
+		if err != nil {
+			t.Fatal(err)
+		}
+		click(t, ctx, menu["export-png"])
+		for _, data := range waitFiles(t, dl, 1) {
+			checkChartPNG(t, data, d, "browser-export-chart-760x900@2x")
+		}
 	})
 
 	t.Run("opens offline from the service worker", func(t *testing.T) {
@@ -493,6 +516,24 @@ func TestBrowser(t *testing.T) {
 			t.Errorf("offline reload: %q (%v), want a new page with the network gone", state, err)
 		}
 	})
+}
+
+// checkChartPNG checks an exported chart picture: it decodes, and is the
+// chart's panel in device pixels (rounded as the painter rounds). It keeps
+// the file in test-output/ as name.png, to be looked at.
+func checkChartPNG(t *testing.T, data []byte, d appDebug, name string) {
+	t.Helper()
+	if err := os.WriteFile(filepath.Join(outDir, name+".png"), data, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	img, err := png.Decode(bytes.NewReader(data))
+	if err != nil {
+		t.Fatalf("the chart's PNG (%d bytes) does not decode: %v", len(data), err)
+	}
+	wantW, wantH := int(math.Round(d.Panel.W*d.Scale)), int(math.Round(d.Panel.H*d.Scale))
+	if b := img.Bounds(); b.Dx() != wantW || b.Dy() != wantH || wantW < 300 {
+		t.Errorf("the chart's PNG is %d × %d, want the panel %v at %g×: %d × %d", b.Dx(), b.Dy(), d.Panel, d.Scale, wantW, wantH)
+	}
 }
 
 // waitFiles waits until dir holds n finished downloads and returns them.
