@@ -613,7 +613,7 @@ func sentences(s scenario.Scenario, r Result, a Advice) []string {
 		out = append(out, fmt.Sprintf("The smallest %s pack that lasts the plan without a visit: %d × %s (%.0f mAh).",
 			sim.PackFor(s).Chem.Name, c.Parallel, c.Form, c.CapacityMAh))
 	}
-	if a.Autonomy.Days > 0 {
+	if a.Autonomy.Days > 0 && s.Harvest.Kind != scenario.HarvestNone { // without a harvester it is the lifetime
 		out = append(out, fmt.Sprintf("Fully charged and with no harvest, the cells carry the node %.0f days at the worst time of year (%s).", a.Autonomy.Days, a.Autonomy.Date))
 	}
 	if len(a.Levers) > 0 {

@@ -3,6 +3,7 @@ package plan
 import (
 	"context"
 	"errors"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -166,4 +167,21 @@ func BenchmarkPanelSizing(b *testing.B) {
 			b.Fatal(err)
 		}
 	}
+}
+
+// Days of autonomy speak of bridging a spell without harvest: the sentence
+// is for nodes with a harvester (without one, it would repeat the lifetime).
+func TestAutonomySentenceOnlyWithAHarvester(t *testing.T) {
+	_, a := advise(t, scenario.Demo())
+	for _, line := range a.Sentences {
+		assert.NotContains(t, line, "with no harvest", "the demo has no harvester")
+	}
+	s := panelNode()
+	s.Plan.WeatherYears = 2
+	_, a = advise(t, s)
+	var found bool
+	for _, line := range a.Sentences {
+		found = found || strings.Contains(line, "with no harvest")
+	}
+	assert.True(t, found, "%q", a.Sentences)
 }
