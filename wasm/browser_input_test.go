@@ -265,26 +265,24 @@ func wheel(t testing.TB, ctx context.Context, x, y, dy float64) {
 }
 
 // scrollInto turns the wheel over the input column until the input at path
-// is in view.
+// is in view: down first, then up, so the search does not depend on which
+// inputs happen to be in view (the map of them has no order).
 func scrollInto(t testing.TB, ctx context.Context, path string) rect {
 	t.Helper()
-	for range 12 {
-		d := debugState(t, ctx)
-		if r, ok := d.Fields[path]; ok {
-			if _, isSlider := d.Sliders[path]; isSlider || !hasSlider(path) {
-				return r
+	for _, dy := range []float64{240, -240} {
+		for range 12 {
+			d := debugState(t, ctx)
+			if r, ok := d.Fields[path]; ok {
+				if _, isSlider := d.Sliders[path]; isSlider || !hasSlider(path) {
+					return r
+				}
 			}
+			x := 0.0
+			for _, r := range d.Fields {
+				x = max(x, r.X) // every input of the column starts at about the same x
+			}
+			wheel(t, ctx, x+4, 300, dy)
 		}
-		ref := d.Fields["site.position"]
-		for _, r := range d.Fields {
-			ref = r
-			break
-		}
-		dy := 240.0
-		if y := ref.Y; d.Fields[path].Y == 0 && y > 300 {
-			dy = -240
-		}
-		wheel(t, ctx, ref.X+4, 300, dy)
 	}
 	t.Fatalf("%s never came into view: %+v", path, debugState(t, ctx).Fields)
 	return rect{}
