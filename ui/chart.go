@@ -5,110 +5,27 @@ import (
 	"time"
 
 	"nodelife/engine/plan"
+	"nodelife/engine/report"
 )
 
-// TimeScale maps calendar time onto x.
-type TimeScale struct {
-	Start, End time.Time
-	X0, X1     float64
-}
+// The chart's scales and ticks are the engine's (engine/report), so the
+// canvas chart and the exported SVG and PNG mark the same dates.
+type (
+	// TimeScale maps calendar time onto x.
+	TimeScale = report.TimeScale
+	// LinearScale maps a value range onto a pixel range (Y0 for V0, Y1 for V1).
+	LinearScale = report.LinearScale
+	// Tick is one labelled mark on an axis.
+	Tick = report.Tick
+)
 
-// X returns the x of t.
-func (s TimeScale) X(t time.Time) float64 {
-	span := s.End.Sub(s.Start).Seconds()
-	if span <= 0 {
-		return s.X0
-	}
-	return s.X0 + (s.X1-s.X0)*t.Sub(s.Start).Seconds()/span
-}
+// DateTicks returns month or year ticks as fine as minGapPx allows; see
+// report.DateTicks.
+func DateTicks(s TimeScale, minGapPx float64) []Tick { return report.DateTicks(s, minGapPx) }
 
-// LinearScale maps a value range onto a pixel range (Y0 for V0, Y1 for V1).
-type LinearScale struct {
-	V0, V1 float64
-	Y0, Y1 float64
-}
-
-// Y returns the pixel of v.
-func (s LinearScale) Y(v float64) float64 {
-	return s.Y0 + (s.Y1-s.Y0)*(v-s.V0)/(s.V1-s.V0)
-}
-
-// Tick is one labelled mark on an axis.
-type Tick struct {
-	At    time.Time // for date ticks
-	Value float64   // for value ticks
-	Pos   float64   // x or y, CSS px
-	Label string
-	Major bool // a year boundary on a date axis
-}
-
-// monthTicksMaxMonths is the longest horizon that gets month ticks: beyond
-// three years they crowd the years out.
-const monthTicksMaxMonths = 36.5
-
-// tickStepsMonths are the date tick spacings tried, finest first.
-var tickStepsMonths = []int{1, 2, 3, 6, 12, 24, 60}
-
-// DateTicks returns ticks at the first of a month between s.Start and s.End
-// (inclusive), as fine as the labels allow: each step must leave minGapPx
-// between tick positions. Ticks on 1 January are Major and labelled with the
-// year; others with the month ("Apr"). Month ticks are used only on
-// horizons up to monthTicksMaxMonths; longer ones mark years. Dates are taken
-// in s.Start's location.
-func DateTicks(s TimeScale, minGapPx float64) []Tick {
-	months := s.End.Sub(s.Start).Hours() / 24 / (365.25 / 12)
-	if months <= 0 {
-		return nil
-	}
-	pxPerMonth := (s.X1 - s.X0) / months
-	step := tickStepsMonths[len(tickStepsMonths)-1]
-	for _, st := range tickStepsMonths {
-		if st < 12 && months > monthTicksMaxMonths {
-			continue
-		}
-		if float64(st)*pxPerMonth >= minGapPx {
-			step = st
-			break
-		}
-	}
-	loc := s.Start.Location()
-	t := time.Date(s.Start.Year(), s.Start.Month(), 1, 0, 0, 0, 0, loc)
-	if t.Before(s.Start) {
-		t = t.AddDate(0, 1, 0)
-	}
-	var ticks []Tick
-	for ; !t.After(s.End); t = t.AddDate(0, 1, 0) {
-		if step >= 12 {
-			if t.Month() != time.January || t.Year()%(step/12) != 0 {
-				continue
-			}
-		} else if (int(t.Month())-1)%step != 0 {
-			continue
-		}
-		tk := Tick{At: t, Pos: s.X(t), Major: t.Month() == time.January}
-		if tk.Major {
-			tk.Label = t.Format("2006")
-		} else {
-			tk.Label = t.Format("Jan")
-		}
-		ticks = append(ticks, tk)
-	}
-	return ticks
-}
-
-// PercentTicks returns ticks for a 0–100 % axis: every 25 % when the axis is
-// at least minGapPx × 4 tall, else every 50 %.
-func PercentTicks(s LinearScale, minGapPx float64) []Tick {
-	step := 25.0
-	if math.Abs(s.Y(0)-s.Y(25)) < minGapPx {
-		step = 50
-	}
-	var ticks []Tick
-	for v := 0.0; v <= 100; v += step {
-		ticks = append(ticks, Tick{Value: v, Pos: s.Y(v), Label: FormatNumber(v)})
-	}
-	return ticks
-}
+// PercentTicks returns ticks every 25 % or, on a short axis, 50 %; see
+// report.PercentTicks.
+func PercentTicks(s LinearScale, minGapPx float64) []Tick { return report.PercentTicks(s, minGapPx) }
 
 // Column is the days that fall in one pixel column of the chart: the lowest
 // and highest state of charge and the mean of the daily means, in %, the

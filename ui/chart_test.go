@@ -94,8 +94,8 @@ func TestDateTicksCrowded(t *testing.T) {
 }
 
 func TestPercentTicks(t *testing.T) {
-	tall := PercentTicks(LinearScale{0, 100, 400, 0}, 32)
-	short := PercentTicks(LinearScale{0, 100, 100, 0}, 32)
+	tall := PercentTicks(LinearScale{V0: 0, V1: 100, Y0: 400, Y1: 0}, 32)
+	short := PercentTicks(LinearScale{V0: 0, V1: 100, Y0: 100, Y1: 0}, 32)
 	if len(tall) != 5 || tall[1].Label != "25" || tall[4].Pos != 0 {
 		t.Errorf("400 px axis: %v, want 0, 25, 50, 75, 100 with 100 at the top", tall)
 	}

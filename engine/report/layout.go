@@ -174,7 +174,7 @@ func layout(r plan.Result, o SVGOptions) *chart {
 
 	c.Time.X0, c.Time.X1 = c.Plot.X, c.Plot.Right()
 	c.SoC = LinearScale{V0: 0, V1: 100, Y0: c.Plot.Bottom(), Y1: c.Plot.Y}
-	c.YTicks = percentTicks(c.SoC, 2*labelSize+8)
+	c.YTicks = PercentTicks(c.SoC, 2*labelSize+8)
 	c.XTicks = dateTicks(c.Time, minTickGapPx)
 	c.readMonths()
 	top := niceCeil(c.maxWh)

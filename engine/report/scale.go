@@ -53,6 +53,7 @@ type Tick struct {
 	Value float64   // on a value axis
 	Pos   float64   // x on a date axis, y on a value axis
 	Label string
+	Major bool // 1 January on a date axis
 }
 
 // monthTicksMaxMonths is the longest horizon given month ticks; beyond
@@ -62,13 +63,13 @@ const monthTicksMaxMonths = 36.5
 // tickStepsMonths are the date tick spacings tried, finest first.
 var tickStepsMonths = []int{1, 2, 3, 6, 12, 24, 60}
 
-// dateTicks returns ticks on the first of the month from s.Start to s.End
+// DateTicks returns ticks on the first of the month from s.Start to s.End
 // (inclusive), as fine as minGapPx between ticks allows. On horizons up to
-// monthTicksMaxMonths they may fall on any month: 1 January is labelled with
-// the year, other months with their short name, and the first tick, when it
-// is not in January and there is room, with month and year.
-// Longer horizons get year ticks only. Dates are taken in s.Start's location.
-func dateTicks(s TimeScale, minGapPx float64) []Tick {
+// monthTicksMaxMonths they may fall on any month: 1 January is Major and
+// labelled with the year, other months with their short name. Longer
+// horizons get year ticks only. Dates are taken in s.Start's location.
+// The SVG chart and the app's canvas chart both use it.
+func DateTicks(s TimeScale, minGapPx float64) []Tick {
 	months := s.End.Sub(s.Start).Hours() / 24 / (365.25 / 12)
 	if months <= 0 || s.X1 <= s.X0 {
 		return nil
@@ -98,12 +99,19 @@ func dateTicks(s TimeScale, minGapPx float64) []Tick {
 		} else if (int(t.Month())-1)%step != 0 {
 			continue
 		}
-		tk := Tick{At: t, Pos: s.X(t), Label: t.Format("Jan")}
-		if t.Month() == time.January {
+		tk := Tick{At: t, Pos: s.X(t), Label: t.Format("Jan"), Major: t.Month() == time.January}
+		if tk.Major {
 			tk.Label = t.Format("2006")
 		}
 		ticks = append(ticks, tk)
 	}
+	return ticks
+}
+
+// dateTicks is DateTicks for the SVG chart, which also names the first
+// year on the first tick when it is not in January and there is room.
+func dateTicks(s TimeScale, minGapPx float64) []Tick {
+	ticks := DateTicks(s, minGapPx)
 	// Name the first year on the first tick when its label has room: the
 	// chart keeps a label within the plot, so one at the start reaches
 	// right by its full width.
@@ -118,9 +126,9 @@ func dateTicks(s TimeScale, minGapPx float64) []Tick {
 	return ticks
 }
 
-// percentTicks returns ticks on a 0–100 % axis: every 25 % when they are at
+// PercentTicks returns ticks on a 0–100 % axis: every 25 % when they are at
 // least minGapPx apart, else every 50 %.
-func percentTicks(s LinearScale, minGapPx float64) []Tick {
+func PercentTicks(s LinearScale, minGapPx float64) []Tick {
 	step := 25.0
 	if math.Abs(s.Y(0)-s.Y(25)) < minGapPx {
 		step = 50
