@@ -104,17 +104,7 @@ func withValues(s scenario.Scenario, values map[string]json.RawMessage) (scenari
 		panic("ui: the engine wrote a scenario it cannot read: " + err.Error())
 	}
 	for path, v := range values {
-		obj := root
-		parts := strings.Split(path, ".")
-		for _, p := range parts[:len(parts)-1] {
-			next, ok := obj[p].(map[string]any)
-			if !ok {
-				next = map[string]any{}
-				obj[p] = next
-			}
-			obj = next
-		}
-		obj[parts[len(parts)-1]] = v
+		scenario.SetPath(root, path, v)
 	}
 	data, err := json.Marshal(root)
 	if err != nil {

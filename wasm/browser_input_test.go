@@ -443,33 +443,11 @@ func demoWith(t testing.TB, values map[string]any) []byte {
 		t.Fatal(err)
 	}
 	for path, v := range values {
-		obj := m
-		parts := splitPath(path)
-		for _, p := range parts[:len(parts)-1] {
-			next, ok := obj[p].(map[string]any)
-			if !ok {
-				next = map[string]any{}
-				obj[p] = next
-			}
-			obj = next
-		}
-		obj[parts[len(parts)-1]] = v
+		scenario.SetPath(m, path, v)
 	}
 	data, err := json.MarshalIndent(m, "", "  ")
 	if err != nil {
 		t.Fatal(errors.New("demoWith: " + err.Error()))
 	}
 	return data
-}
-
-func splitPath(p string) []string {
-	var parts []string
-	start := 0
-	for i := range len(p) {
-		if p[i] == '.' {
-			parts = append(parts, p[start:i])
-			start = i + 1
-		}
-	}
-	return append(parts, p[start:])
 }

@@ -411,3 +411,23 @@ func TestRadioPayloadForBLE(t *testing.T) {
 	_, err = Parse([]byte(`{"node": {"radio": {"class": "lora", "payload_bytes": 40}}}`))
 	assert.NoError(t, err)
 }
+
+func TestSetPathChangesOneValueAndKeepsTheRest(t *testing.T) {
+	var root map[string]any
+	require.NoError(t, json.Unmarshal(DemoJSON(), &root))
+	SetPath(root, "cells.capacity_mah", 1234)
+	SetPath(root, "name", "changed")
+	data, err := json.Marshal(root)
+	require.NoError(t, err)
+	s, err := Parse(data)
+	require.NoError(t, err)
+	assert.Equal(t, 1234.0, s.Cells.CapacityMAh)
+	assert.Equal(t, "changed", s.Name)
+	assert.Equal(t, Demo().Node, s.Node, "the values not set are kept")
+
+	// Objects on the way are made, and a non-object on the way is replaced.
+	m := map[string]any{"a": 1.0}
+	SetPath(m, "a.b.c", "x")
+	SetPath(m, "d", 2.0)
+	assert.Equal(t, map[string]any{"a": map[string]any{"b": map[string]any{"c": "x"}}, "d": 2.0}, m)
+}

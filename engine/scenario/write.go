@@ -79,3 +79,21 @@ func (s Scenario) JSON() []byte {
 	b.WriteString("\n}\n")
 	return b.Bytes()
 }
+
+// SetPath puts v at a dotted JSON path ("cells.capacity_mah") in a decoded
+// scenario file, making the objects on the way where they are missing or
+// are not objects. It lets callers change a few values of a file while
+// keeping the rest as written.
+func SetPath(root map[string]any, path string, v any) {
+	parts := strings.Split(path, ".")
+	obj := root
+	for _, p := range parts[:len(parts)-1] {
+		next, ok := obj[p].(map[string]any)
+		if !ok {
+			next = map[string]any{}
+			obj[p] = next
+		}
+		obj = next
+	}
+	obj[parts[len(parts)-1]] = v
+}
