@@ -1,7 +1,6 @@
 package main
 
 import (
-	"encoding/json"
 	"errors"
 	"fmt"
 	"io"
@@ -38,9 +37,7 @@ func cmdCompare(args []string, stdout io.Writer) error {
 		return usageError{"compare: " + err.Error()}
 	}
 	if *asJSON {
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		return enc.Encode(c)
+		return writeJSON(stdout, c)
 	}
 	_, err = io.WriteString(stdout, compareTable(c, files))
 	return err

@@ -196,9 +196,7 @@ func cmdPlan(args []string, stdin io.Reader, stdout io.Writer) error {
 		return usageError{prefixLines(name, err)}
 	}
 	if *asJSON {
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		return enc.Encode(r)
+		return writeJSON(stdout, r)
 	}
 	_, err = io.WriteString(stdout, summary(s, r))
 	return err
@@ -347,9 +345,7 @@ func cmdCells(args []string, stdout io.Writer) error {
 	}
 	lib := cell.Library()
 	if *asJSON {
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		return enc.Encode(map[string]any{"chemistries": lib})
+		return writeJSON(stdout, map[string]any{"chemistries": lib})
 	}
 	var b strings.Builder
 	for _, c := range lib {
@@ -460,9 +456,7 @@ func cmdSun(args []string, stdout io.Writer) error {
 		rep.Sunrise, rep.Sunset = utc(day.Sunrise), utc(day.Sunset)
 	}
 	if *asJSON {
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		return enc.Encode(rep)
+		return writeJSON(stdout, rep)
 	}
 	var b strings.Builder
 	fmt.Fprintf(&b, "Sun at %.4f°, %.4f° on %s\n", *lat, *lon, rep.Time)
@@ -517,9 +511,7 @@ func cmdPresets(args []string, stdout io.Writer) error {
 	}
 	rep.Climates = climate.Presets()
 	if *asJSON {
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		return enc.Encode(rep)
+		return writeJSON(stdout, rep)
 	}
 	var b strings.Builder
 	b.WriteString("Node profiles (node.profile):\n")
@@ -536,4 +528,11 @@ func cmdPresets(args []string, stdout io.Writer) error {
 	}
 	_, err := io.WriteString(stdout, b.String())
 	return err
+}
+
+// writeJSON writes v to w as indented JSON, as every --json output is.
+func writeJSON(w io.Writer, v any) error {
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(v)
 }
