@@ -10,32 +10,6 @@ import (
 // progressEvery is how often the advice's progress is redrawn.
 const progressEvery = 250 * time.Millisecond
 
-// handBackEvery is the longest the advice computes before it hands the page
-// back for a tick: a single run takes longer than a frame in the browser
-// (README, Performance in the browser), so the advice also yields inside
-// runs, through the engine's Yield hook, once this much time has passed.
-const handBackEvery = 12 * time.Millisecond
-
-// handBack calls yield when at least every has passed since the last time
-// the page had its turn.
-type handBack struct {
-	every time.Duration
-	now   func() time.Time
-	yield func()
-	last  time.Time
-}
-
-// reset notes that the page has just had its turn.
-func (h *handBack) reset() { h.last = h.now() }
-
-// maybe yields when the time is up.
-func (h *handBack) maybe() {
-	if h.now().Sub(h.last) >= h.every {
-		h.yield()
-		h.reset()
-	}
-}
-
 // adviceJob is the advice being worked out in the background for the
 // current scenario.
 type adviceJob struct {
@@ -79,9 +53,7 @@ func (a *App) maybeStartAdvice() {
 	go func() {
 		defer close(done)
 		var shown time.Time
-		hand := &handBack{every: handBackEvery, now: time.Now, yield: a.yield}
-		hand.reset()
-		adv, err := plan.Advise(ctx, s, in, r, plan.AdviceOptions{Yield: hand.maybe, Progress: func(d, t int) {
+		adv, err := plan.Advise(ctx, s, in, r, plan.AdviceOptions{Progress: func(d, t int) {
 			a.mu.Lock()
 			if a.advice.gen == gen {
 				a.advice.status.Done, a.advice.status.Total = d, t
@@ -94,7 +66,6 @@ func (a *App) maybeStartAdvice() {
 			}
 			a.mu.Unlock()
 			a.yield()
-			hand.reset()
 		}})
 		a.mu.Lock()
 		defer a.mu.Unlock()

@@ -6,9 +6,6 @@ import (
 	"encoding/json"
 	"strings"
 	"testing"
-	"time"
-
-	"github.com/stretchr/testify/assert"
 
 	"nodelife/engine/plan"
 	"nodelife/engine/scenario"
@@ -204,24 +201,4 @@ func mustPlan(t *testing.T, s scenario.Scenario) plan.Result {
 		t.Fatal(err)
 	}
 	return r
-}
-
-func TestHandBackYieldsOnlyWhenTheTimeIsUp(t *testing.T) {
-	clock := time.Date(2027, 1, 1, 0, 0, 0, 0, time.UTC)
-	yields := 0
-	h := &handBack{every: 12 * time.Millisecond, now: func() time.Time { return clock }, yield: func() { yields++ }}
-	h.reset()
-	clock = clock.Add(5 * time.Millisecond)
-	h.maybe()
-	assert.Equal(t, 0, yields, "5 ms after the page's turn: keep computing")
-	clock = clock.Add(7 * time.Millisecond)
-	h.maybe()
-	assert.Equal(t, 1, yields, "12 ms after: hand the page back")
-	clock = clock.Add(11 * time.Millisecond)
-	h.maybe()
-	assert.Equal(t, 1, yields, "the clock restarts at the yield")
-	h.reset()
-	clock = clock.Add(11 * time.Millisecond)
-	h.maybe()
-	assert.Equal(t, 1, yields, "reset (a yield between runs) restarts it too")
 }

@@ -27,9 +27,8 @@
 //     and drawing paints.
 //   - The advice (advice.go) runs plan.Advise in a goroutine after the answer
 //     is on screen, shows its progress, and is cancelled when the scenario
-//     changes; in the browser it waits for a tick between runs and, through
-//     the engine's Yield hook, inside a run every 12 ms (yield_js.go,
-//     handBack), so the page keeps taking input and drawing.
+//     changes; in the browser it waits for a tick between runs (yield_js.go)
+//     so the page keeps taking input and drawing.
 //   - Theme (theme.go) holds the palette, type sizes and spacing as a value;
 //     Fonts (fonts.go) parses the Go fonts once.
 //
