@@ -218,28 +218,96 @@ func valueText(s scenario.Scenario, path string) string {
 	panic("ui: field " + path + " has no single value")
 }
 
-// helpText is the one line under an input: the engine's own description,
-// and for an unset capacity, where the number comes from.
+// Help lines of our own, by input, where the full text is too long for one
+// line of the narrowest column the form uses (formColMin: the narrow
+// layout's, and each of two columns) in the help style: a line cut with "…"
+// reads as broken. The row shows the full text, wrapped, while it has the
+// keyboard.
+var helpLines = map[string]string{
+	pathPosition:          "degrees; south and west negative",
+	"site.timezone":       "IANA time zone; schedules follow its local clock",
+	"site.placement":      "outdoor air, heated indoors, or a set temperature",
+	"site.fixed_temp_c":   "the space's set temperature (cold room, freezer)",
+	"site.climate.preset": "built-in monthly normals; none: your own values", // with no preset picked
+	"node.radio.class":    "message energy: per radio, fixed, or in the wake",
+	"harvest.kind":        "a solar panel outdoors or an indoor-light cell",
+	"plan.reserve_pct":    "swap the cells at this state of charge",
+}
+
+// Short lines for the profiles, by ID: what the node does, the first clause
+// of the profile's note or less (its radio shows in the Radio row). Every
+// note is too long for the line, so every profile needs one.
+var profileLines = map[string]string{
+	"shelf-watcher":    "watches a shelf for gaps a few times a minute",
+	"doorway-counter":  "counts people through a door at 10 fps",
+	"wake-on-presence": "wakes a larger processor when someone arrives",
+	"parking-bay":      "checks a bay every few seconds outdoors",
+	"cold-room":        "watches a cold store once a second",
+}
+
+// Short lines for the climate presets whose note is too long, by ID: the
+// note with fewer words.
+var presetLines = map[string]string{
+	"marine-temperate": "mild, cloudy, rain all year: coasts around 50° N",
+	"cold-continental": "snowy winters, warm summers: inland 50–55° N",
+	"humid-tropical":   "hot, humid, frequent showers: near the equator",
+}
+
+// Names of the chemistries for the short line where the library's name is
+// too long beside "primary, never charge" or "rechargeable".
+var chemistryLines = map[string]string{
+	"li-socl2": "lithium thionyl chloride",
+	"alkaline": "alkaline zinc–MnO2",
+	"nimh-lsd": "low self-discharge NiMH",
+}
+
+// helpText is the help under an input: one line, and when there is more to
+// say, after a line break, the full text the row shows, wrapped, while it has
+// the keyboard; splitHelp takes them apart. The full text is the engine's own
+// description, or where ours says more in the app (a profile's or a preset's
+// note, where an unset capacity comes from), ours.
 func helpText(s scenario.Scenario, path string) string {
+	line, full := helpParts(s, path)
+	if line == "" || line == full {
+		return full
+	}
+	return line + "\n" + full
+}
+
+// splitHelp takes a helpText apart: the line under an unfocused row, and the
+// full text under the focused one (the same when there is only one).
+func splitHelp(help string) (line, full string) {
+	line, full, ok := strings.Cut(help, "\n")
+	if !ok {
+		full = line
+	}
+	return line, full
+}
+
+// helpParts is an input's short help line, "" when the full text is short
+// enough to be the line, and its full text.
+func helpParts(s scenario.Scenario, path string) (line, full string) {
 	switch path {
 	case pathPlace:
-		return "sets latitude, longitude, time zone and climate"
+		return "", "sets latitude, longitude, time zone and climate"
 	case pathPosition:
-		return `degrees north and east (south and west negative); paste "59.91, 10.75"`
+		return helpLines[path], `degrees north and east (south and west negative); paste "59.91, 10.75"`
 	case "cells.capacity_mah":
 		if s.Cells.CapacityMAh == 0 {
-			return "rated capacity of one " + s.Cells.Form + " cell; type a value to override"
+			return "rated capacity per " + s.Cells.Form + " cell; type to override",
+				"rated capacity of one " + s.Cells.Form + " cell; type a value to override"
 		}
 	case "node.profile":
 		// The field's own description is about files; in the app a pick
 		// sets every node input, and the profile's note says what it is.
 		if p, ok := scenario.LookupProfile(s.Node.Profile); ok {
-			return p.Note + "; picking it sets all the node's values"
+			return profileLines[p.ID], p.Note + "; picking it sets all the node's values"
 		}
-		return "your own node; pick a profile to start from a typical node of that kind"
+		return "your own node; pick a profile to start from",
+			"your own node; pick a profile to start from a typical node of that kind"
 	case "site.climate.preset":
 		if p, ok := climate.LookupPreset(s.Site.Climate.Preset); ok {
-			return p.Note
+			return presetLines[p.ID], p.Note
 		}
 	case "cells.chemistry":
 		if c, ok := cell.Lookup(s.Cells.Chemistry); ok {
@@ -247,9 +315,12 @@ func helpText(s scenario.Scenario, path string) string {
 			if c.Primary {
 				kind = "primary, never charge"
 			}
-			return c.Name + "; " + kind
+			if name, ok := chemistryLines[c.ID]; ok {
+				line = name + "; " + kind
+			}
+			return line, c.Name + "; " + kind
 		}
 	}
 	f, _ := scenario.FieldByPath(path)
-	return f.Doc
+	return helpLines[path], f.Doc
 }

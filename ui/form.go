@@ -14,7 +14,7 @@ import (
 type Row struct {
 	Path   string
 	Label  string // short name left of the control
-	Help   string // one line: the field's own description
+	Help   string // a short line, then after "\n" the full text (see helpText)
 	Text   *TextField
 	Choice *Choice
 	Slider *Slider // under a typed number, or nil
@@ -729,15 +729,17 @@ func (f *Form) layoutGroup(gi int, x, y, w float64, m Measurer, th Theme) float6
 		if n > 0 {
 			y += rowGap
 		}
-		// One line of help, in full while the row has the keyboard; a
-		// refusal always in full.
+		// One line of help, the full text while the row has the keyboard;
+		// a refusal always in full. The line is written to fit the
+		// narrowest column, so Elide only guards a narrower one.
+		line, full := splitHelp(r.Help)
 		switch err := r.Err(); {
 		case err != "":
 			r.help = Wrap(m, err, label, w)
 		case r.Focused():
-			r.help = Wrap(m, r.Help, label, w)
+			r.help = Wrap(m, full, label, w)
 		default:
-			r.help = []string{Elide(m, r.Help, label, w)}
+			r.help = []string{Elide(m, line, label, w)}
 		}
 		bw := f.boxW
 		if r.ctl == ctlSegments {
