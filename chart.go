@@ -55,7 +55,8 @@ func cmdChart(args []string, stdin io.Reader, stdout io.Writer) error {
 	case *swapsCSV:
 		out = report.SwapsCSV(r)
 	default:
-		out = report.SVG(r, report.SVGOptions{Width: *width, Height: *height, ReservePct: s.Plan.ReservePct})
+		out = report.SVG(r, report.SVGOptions{Width: *width, Height: *height, ReservePct: s.Plan.ReservePct,
+			Shading: report.ShadingFor(s)})
 	}
 	_, err = stdout.Write(out)
 	return err

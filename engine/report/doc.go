@@ -6,9 +6,12 @@
 // charge as a band with the daily mean as a line, the reserve line, the swap
 // visits and the date the first cells go flat, then a strip of the daily
 // mean temperature at the cells and the monthly harvested and used energy in
-// Wh. It uses the app's light palette and a generic sans-serif font, embeds
-// nothing and links to nothing, and is a pure function of its input: the
-// same Result and options give the same bytes. Layout exposes the scales the
+// Wh. Asked to (SVGOptions.Shading, ShadingFor), it shades the days shorter
+// than 12 hours at the site behind the state of charge (ShortDaySpans), the
+// same days the app's chart shades. It uses the app's light palette and a
+// generic sans-serif font, embeds nothing and links to nothing, and is a
+// pure function of its input: the same Result and options give the same
+// bytes. Layout exposes the scales the
 // chart is drawn with, so tests can check the geometry.
 //
 // Valid range: any Result the planner makes (1 to 20 years of daily rows).

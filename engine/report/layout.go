@@ -30,6 +30,9 @@ type SVGOptions struct {
 	// ReservePct draws a dashed line at this state of charge, %: the level
 	// at which the plan swaps the cells. 0 (the default) draws none.
 	ReservePct float64
+	// Shading shades the days under 12 h behind the plot; ShadingFor gives
+	// a scenario's. The zero value shades nothing.
+	Shading Shading
 }
 
 // Frame is the chart's geometry: where its parts are and the scales every
@@ -46,6 +49,7 @@ type Frame struct {
 	Energy        LinearScale // energy, Wh per month, onto Bars: 0 at the bottom
 	XTicks        []Tick      // date ticks
 	YTicks        []Tick      // state-of-charge ticks
+	ShortDays     []XSpan     // the days under 12 h, shaded behind the plot
 }
 
 // Text sizes, px: labels and body from our design notes (UI.md); the title
@@ -78,6 +82,7 @@ type chart struct {
 	harvest  float64 // harvested over the plan, Wh
 	tempLo   float64 // coldest and warmest daily mean, °C; NaN without data
 	tempHi   float64
+	short    []DaySpan // runs of days under 12 h that o.Shading asks to shade
 	marks    []mark
 	title    string
 	sentence []span
@@ -127,6 +132,13 @@ func layout(r plan.Result, o SVGOptions) *chart {
 	c.Width = float64(clampInt(o.Width, DefaultWidth, MinWidth, MaxWidth))
 	c.Height = float64(clampInt(o.Height, DefaultHeight, MinHeight, MaxHeight))
 	c.readDays()
+	if sh := o.Shading; sh.ShortDays {
+		// Kept when some of them fall within the time axis.
+		spans := ShortDaySpans(r.Daily, sh.LatDeg, sh.LonDeg)
+		if len(SpansX(r.Daily, spans, TimeScale{Start: c.Time.Start, End: c.Time.End, X0: 0, X1: 1})) > 0 {
+			c.short = spans
+		}
+	}
 	W, H := c.Width, c.Height
 
 	// From the top: title, the lifetime sentence, the plot's heading and
@@ -173,6 +185,7 @@ func layout(r plan.Result, o SVGOptions) *chart {
 	c.Plot.H = max(b-c.Plot.Y, 0)
 
 	c.Time.X0, c.Time.X1 = c.Plot.X, c.Plot.Right()
+	c.ShortDays = SpansX(r.Daily, c.short, c.Time)
 	c.SoC = LinearScale{V0: 0, V1: 100, Y0: c.Plot.Bottom(), Y1: c.Plot.Y}
 	c.YTicks = PercentTicks(c.SoC, 2*labelSize+8)
 	c.XTicks = dateTicks(c.Time, minTickGapPx)
@@ -447,6 +460,9 @@ func (c *chart) layoutMarks() {
 // legend items of the state-of-charge plot, in order.
 func (c *chart) legend() []string {
 	items := []string{"band", "mean"}
+	if len(c.short) > 0 {
+		items = append(items, "short")
+	}
 	if c.o.ReservePct > 0 {
 		items = append(items, "reserve")
 	}
@@ -462,6 +478,7 @@ func (c *chart) legend() []string {
 var legendText = map[string]string{
 	"band":    "daily min–max",
 	"mean":    "daily mean",
+	"short":   "days under 12 h",
 	"reserve": "reserve",
 	"swap":    "swap visit",
 	"flat":    "cells flat",

@@ -108,22 +108,62 @@ func DateTicks(s TimeScale, minGapPx float64) []Tick {
 	return ticks
 }
 
-// dateTicks is DateTicks for the SVG chart, which also names the first
-// year on the first tick when it is not in January and there is room.
-func dateTicks(s TimeScale, minGapPx float64) []Tick {
+// dateLabelGapPx is the least air between two date labels, px.
+const dateLabelGapPx = 6
+
+// DateAxis is DateTicks with the start of the axis named, for a chart whose
+// date labels are centred on their ticks and kept within X0..X1. width
+// gives a label's width in px.
+//
+// When the first tick is at s.Start it is labelled with its month and year
+// ("Mar 2027"; a 1 January tick keeps its year, "2027"). Otherwise a tick
+// at s.Start (x = X0) with the start's month and year comes first, in place
+// of the first tick when that is nearer than minGapPx, so that the ticks
+// stay at least minGapPx apart. Then, left to right, a label that would
+// come within dateLabelGapPx of the label before it is left empty: its tick
+// and grid line stay, and the start's name always shows. The SVG chart and
+// the app's canvas chart both use it, so they name the same dates.
+func DateAxis(s TimeScale, minGapPx float64, width func(label string) float64) []Tick {
 	ticks := DateTicks(s, minGapPx)
-	// Name the first year on the first tick when its label has room: the
-	// chart keeps a label within the plot, so one at the start reaches
-	// right by its full width.
-	if len(ticks) > 0 && ticks[0].At.Month() != time.January {
-		label := ticks[0].At.Format("Jan 2006")
-		w := textWidth(label, labelSize)
-		right := max(ticks[0].Pos-w/2, s.X0) + w
-		if len(ticks) == 1 || right+6 <= ticks[1].Pos-textWidth(ticks[1].Label, labelSize)/2 {
-			ticks[0].Label = label
+	if !s.End.After(s.Start) || s.X1 <= s.X0 {
+		return ticks
+	}
+	switch {
+	case len(ticks) > 0 && ticks[0].At.Equal(s.Start):
+		ticks[0].Label = startLabel(s.Start)
+	default:
+		start := Tick{At: s.Start, Pos: s.X0, Label: startLabel(s.Start),
+			Major: s.Start.Month() == time.January && s.Start.Day() == 1}
+		if len(ticks) > 0 && ticks[0].Pos-s.X0 < minGapPx {
+			ticks = ticks[1:]
 		}
+		ticks = append([]Tick{start}, ticks...)
+	}
+	right := math.Inf(-1) // the right edge of the last label kept
+	for i := range ticks {
+		w := width(ticks[i].Label)
+		l := min(max(ticks[i].Pos-w/2, s.X0), s.X1-w)
+		if i > 0 && l < right+dateLabelGapPx {
+			ticks[i].Label = ""
+			continue
+		}
+		right = l + w
 	}
 	return ticks
+}
+
+// startLabel names the month and year of t, or the year alone on 1 January
+// as DateTicks labels its ticks.
+func startLabel(t time.Time) string {
+	if t.Month() == time.January && t.Day() == 1 {
+		return t.Format("2006")
+	}
+	return t.Format("Jan 2006")
+}
+
+// dateTicks is DateAxis for the SVG chart, with its label widths.
+func dateTicks(s TimeScale, minGapPx float64) []Tick {
+	return DateAxis(s, minGapPx, func(label string) float64 { return textWidth(label, labelSize) })
 }
 
 // PercentTicks returns ticks on a 0–100 % axis: every 25 % when they are at

@@ -24,6 +24,11 @@ const (
 	colLoad    = "#5B6770"
 	colSwap    = "#7A5BA6"
 	colFlat    = "#B3372B"
+	// The days under 12 h behind the plot: the strip's cold blue (tempCold)
+	// at about 8 % over the panel, our choice. It stays lighter than the grid,
+	// which shows through, and keeps the labels' contrast (the app's Light
+	// theme has the same colour; ui/theme.go).
+	colShort = "#F1F4F9"
 )
 
 const bandOpacity = "0.25" // UI.md: the band colour at 25 %
@@ -104,6 +109,8 @@ func (c *chart) drawHead(w *svgWriter) {
 		switch it {
 		case "band":
 			w.p(`<rect x="%s" y="%s" width="%d" height="10" fill="%s" fill-opacity="%s"/>`, num(x), num(cy-5), swatchW, colBand, bandOpacity)
+		case "short": // outlined: the fill alone is too faint to see as a swatch
+			w.p(`<rect x="%s" y="%s" width="%d" height="9" fill="%s" stroke="%s"/>`, num(x+0.5), num(cy-4.5), swatchW-1, colShort, colRule)
 		case "mean":
 			w.p(`<line x1="%s" y1="%s" x2="%s" y2="%s" stroke="%s" stroke-width="2"/>`, num(x), num(cy), num(x+swatchW), num(cy), colMean)
 		case "reserve":
@@ -121,6 +128,14 @@ func (c *chart) drawHead(w *svgWriter) {
 
 func (c *chart) drawPlot(w *svgWriter) {
 	p := c.Plot
+	// The days under 12 h, under everything else.
+	if len(c.ShortDays) > 0 {
+		w.p(`<g class="short-days" fill="%s" stroke="none">`, colShort)
+		for _, sp := range c.ShortDays {
+			w.p(`<rect x="%s" y="%s" width="%s" height="%s"/>`, num(sp.X0), num(p.Y), num(sp.X1-sp.X0), num(p.H))
+		}
+		w.p("</g>\n")
+	}
 	// Grid: value lines across, date lines down through the plot and the
 	// bars, so the three parts read against the same dates.
 	w.p(`<g class="grid" stroke="%s" stroke-width="1" shape-rendering="crispEdges">`, colGrid)
@@ -208,6 +223,9 @@ func (c *chart) drawPlot(w *svgWriter) {
 	for _, t := range c.XTicks {
 		w.p(`<line x1="%s" y1="%s" x2="%s" y2="%s" stroke="%s" shape-rendering="crispEdges"/>`,
 			num(crisp(t.Pos)), num(p.Bottom()), num(crisp(t.Pos)), num(p.Bottom()+4), colRule)
+		if t.Label == "" { // no room beside the label before it
+			continue
+		}
 		// Keep the first and last labels inside the plot's span.
 		lw := textWidth(t.Label, labelSize)
 		x := min(max(t.Pos, p.X+lw/2), p.Right()+8-lw/2)
