@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"fmt"
 	"strings"
 	"unicode"
 
@@ -28,11 +29,29 @@ func (a *App) act(id string) {
 	case "save":
 		a.download(fileName(a.scen.Name, ".json"), "application/json", a.scen.JSON())
 	case "export":
-		a.openMenu("export", exportItems)
+		items := exportItems
+		if len(a.kept) > 0 {
+			items = append(items[:len(items):len(items)], exportOptionsItem)
+		}
+		a.openMenu("export", items)
+	case "export-options":
+		a.exportOptions()
+	case "options":
+		a.showOpts = !a.showOpts
+		a.layout()
+	case "keep":
+		a.keep()
+	default:
+		var i int
+		if _, err := fmt.Sscanf(id, "option-edit-%d", &i); err == nil {
+			a.editKept(i)
+		} else if _, err := fmt.Sscanf(id, "option-remove-%d", &i); err == nil {
+			a.removeKept(i)
+		}
 	case "export-json":
 		a.download(fileName(a.scen.Name, "-result.json"), "application/json", a.resJSON)
 	case "export-svg":
-		svg := report.SVG(a.res, report.SVGOptions{ReservePct: a.scen.Plan.ReservePct})
+		svg := report.SVG(a.res, report.SVGOptions{ReservePct: a.scen.Plan.ReservePct, Shading: report.ShadingFor(a.scen)})
 		a.download(fileName(a.scen.Name, "-chart.svg"), "image/svg+xml", svg)
 	case "export-png":
 		a.wantPNG, a.dirty = true, true // painted and read back in the next Draw
@@ -51,6 +70,10 @@ var exportItems = []Option{
 	{Value: "export-daily", Label: "Daily rows", Detail: "CSV"},
 	{Value: "export-swaps", Label: "Swap dates", Detail: "CSV"},
 }
+
+// exportOptionsItem is the export menu's entry for the options, while
+// there are kept ones.
+var exportOptionsItem = Option{Value: "export-options", Label: "Options", Detail: "JSON, the comparison"}
 
 // openItems are the open menu's entries.
 var openItems = []Option{

@@ -175,6 +175,10 @@ type Debug struct {
 	Hover   string `json:"hover"`   // the date of the chart's read-out, or ""
 	Chart   Rect   `json:"chart"`   // the hover area: state of charge down to the bars
 	Panel   Rect   `json:"panel"`   // the chart's whole panel, as the PNG export paints it
+	// Options are the options view's column names, kept options first,
+	// while the view shows; OptionsProblem says why they cannot be compared.
+	Options        []string `json:"options"`
+	OptionsProblem string   `json:"options_problem"`
 	// Redraw is how long the last change took from its commit to the
 	// screen, for the browser benchmarks.
 	Redraw Redraw `json:"redraw"`
@@ -226,6 +230,13 @@ func (a *App) Debug() Debug {
 		for i, o := range m.Options {
 			d.Menu[o.Value] = Rect{m.List.X + 1, m.List.Y + listPad + float64(i)*m.ItemH, m.List.W - 2, m.ItemH}
 		}
+	}
+	if a.page.options != nil {
+		for _, k := range a.kept {
+			d.Options = append(d.Options, k.Name())
+		}
+		d.Options = append(d.Options, currentName)
+		d.OptionsProblem = a.page.options.Problem
 	}
 	d.Undo, d.Redo = a.history.Depth()
 	d.Advice.State = [...]string{"waiting", "running", "done", "failed"}[a.advice.status.State]

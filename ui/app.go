@@ -11,6 +11,7 @@ import (
 	"github.com/hajimehoshi/ebiten/v2"
 
 	"nodelife/engine/plan"
+	"nodelife/engine/report"
 	"nodelife/engine/scenario"
 )
 
@@ -65,7 +66,9 @@ type App struct {
 		from   scenario.Scenario // the scenario before the drag
 	}
 	advice     adviceJob
-	menu       *Choice // the open header menu, or nil
+	menu       *Choice      // the open header menu, or nil
+	kept       []keptOption // scenarios kept to compare with this one
+	showOpts   bool         // the options view is showing
 	notice     string
 	noticeErr  bool
 	sideScroll float64
@@ -158,6 +161,9 @@ func (a *App) changed() {
 		return
 	}
 	data, summary := a.scen.JSON(), Summary(a.scen.Name, a.answer)
+	if cs := comparisonSummary(a.optionsContent()); cs != "" {
+		summary += " " + cs
+	}
 	a.outbox = append(a.outbox, func() { a.host.Changed(data, summary) })
 }
 
@@ -167,12 +173,27 @@ func (a *App) layout() {
 	undo, redo := a.history.Depth()
 	c := PageContent{Name: a.scen.Name, Result: a.res, ReservePct: a.scen.Plan.ReservePct, Answer: a.answer,
 		Advice: a.advice.status, Notice: a.notice, NoticeError: a.noticeErr,
-		CanUndo: undo > 0, CanRedo: redo > 0, SideScroll: a.sideScroll}
+		CanUndo: undo > 0, CanRedo: redo > 0, SideScroll: a.sideScroll, Site: report.ShadingFor(a.scen)}
+	if a.showOpts {
+		oc := a.optionsContent()
+		c.Options = &oc
+	}
 	a.page = LayoutPage(a.w, a.h, c, a.fonts, a.theme, 1/a.scale)
 	a.sideScroll = a.page.SideScroll
-	a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme)
+	a.layoutForm()
 	a.hoverStale = true
 	a.dirty = true
+}
+
+// layoutForm places the inputs in their column, or takes them off the
+// screen while the narrow options view hides them. Call with a.mu held.
+func (a *App) layoutForm() {
+	if a.page.Form.Empty() {
+		a.form.Cancel()
+		a.form.View = Rect{}
+		return
+	}
+	a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme)
 }
 
 // resize takes a new window size (CSS px) and device scale factor.
@@ -245,18 +266,23 @@ func (a *App) step(in *Input) {
 		if in.Pressed && b.Hover {
 			in.Pressed = false
 			if b.Enabled {
-				a.act(b.ID)
+				a.act(b.ID) // may lay the page out again, buttons and all
+				break
 			}
 		}
 	}
 
-	changed, edit := a.form.Update(in)
+	var changed bool
+	var edit *Edit
+	if !a.page.Form.Empty() {
+		changed, edit = a.form.Update(in)
+	}
 	if edit != nil {
 		a.form.Settle(a.apply(*edit), a.scen)
 		changed = true
 	}
 	if changed {
-		a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme) // help and error lines may have changed
+		a.layoutForm() // help and error lines may have changed
 		a.dirty = true
 	}
 
@@ -353,7 +379,7 @@ func (a *App) undo(redo bool) {
 	a.setScenario(s, r)
 	a.form.Sync(s)
 	a.form.Cancel() // a typed value or a refusal belonged to the scenario left
-	a.form.Layout(a.page.Form, a.page.Screen, a.fonts, a.theme)
+	a.layoutForm()
 }
 
 // Update is ebiten's tick: one input snapshot, handed to the widgets.
@@ -440,8 +466,10 @@ func (a *App) Draw(screen *ebiten.Image) {
 		}
 		p := NewPainter(screen, a.scale, a.fonts, a.white)
 		drawPage(p, &a.page, a.theme)
-		drawForm(p, a.form, a.theme)
-		drawFormOverlay(p, a.form, a.theme)
+		if !a.page.Form.Empty() {
+			drawForm(p, a.form, a.theme)
+			drawFormOverlay(p, a.form, a.theme)
+		}
 		if a.menu != nil {
 			drawChoiceList(p, a.menu, a.theme)
 		}

@@ -23,6 +23,13 @@ type (
 // report.DateTicks.
 func DateTicks(s TimeScale, minGapPx float64) []Tick { return report.DateTicks(s, minGapPx) }
 
+// DateAxis returns DateTicks with the start named on the first label, as
+// wide as m measures the labels in st; see report.DateAxis, which the SVG
+// chart uses too.
+func DateAxis(s TimeScale, minGapPx float64, m Measurer, st TextStyle) []Tick {
+	return report.DateAxis(s, minGapPx, func(label string) float64 { return m.Advance(label, st) })
+}
+
 // PercentTicks returns ticks every 25 % or, on a short axis, 50 %; see
 // report.PercentTicks.
 func PercentTicks(s LinearScale, minGapPx float64) []Tick { return report.PercentTicks(s, minGapPx) }

@@ -1,12 +1,14 @@
 package ui
 
 import (
+	"image/color"
 	"math"
 	"strings"
 	"testing"
 	"time"
 
 	"nodelife/engine/plan"
+	"nodelife/engine/report"
 	"nodelife/engine/scenario"
 )
 
@@ -172,7 +174,7 @@ func TestPlaceLabels(t *testing.T) {
 func TestChartOfTheDemo(t *testing.T) {
 	s := scenario.Demo()
 	r := mustPlan(t, s)
-	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
 	if len(v.Swaps) != len(r.Swaps) || len(v.Swaps) == 0 {
 		t.Fatalf("%d swap markers for %d swaps", len(v.Swaps), len(r.Swaps))
 	}
@@ -205,7 +207,7 @@ func TestChartSwapOnTheFlatDate(t *testing.T) {
 	if len(r.Swaps) == 0 || r.FirstBrownout == nil || r.Swaps[0].Date != *r.FirstBrownout {
 		t.Fatalf("swaps %v, flat %v: the test needs a swap on the flat date", r.Swaps, r.FirstBrownout)
 	}
-	v := layoutChart(Rect{300, 60, 620, 600}, r, 0, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, 0, report.Shading{}, fonts(t), Light(), 1)
 	var labels []string
 	for _, tx := range v.Labels.texts {
 		if tx.role == roleSwap || tx.role == roleFlat || strings.HasPrefix(tx.s, "reserve") {
@@ -239,7 +241,7 @@ func farNorth() scenario.Scenario {
 func TestChartBarsCutAFarLargerHarvest(t *testing.T) {
 	s := farNorth()
 	r := mustPlan(t, s)
-	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
 	maxH, maxL := 0.0, 0.0
 	for _, m := range v.Months {
 		maxH, maxL = math.Max(maxH, m.HarvestWhPerDay), math.Max(maxL, m.LoadWhPerDay)
@@ -265,7 +267,7 @@ func TestChartNamesWhatEndsTheCells(t *testing.T) {
 	if r.EndOfLifeLimit == nil || *r.EndOfLifeLimit != "temperature" {
 		t.Fatalf("end of life %v: the test needs cells stopped by the cold", r.EndOfLifeLimit)
 	}
-	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
 	if v.Flat == nil || !strings.HasPrefix(v.Flat.Label, "outside rated temperature") {
 		t.Errorf("marker %+v; want it to say the cells are outside their rated temperature", v.Flat)
 	}
@@ -279,6 +281,149 @@ func TestNiceCeil(t *testing.T) {
 	for _, c := range []struct{ v, want float64 }{{0.034, 0.05}, {0.05, 0.05}, {2.47, 2.5}, {3, 5}, {7, 10}, {0, 1}, {120, 200}} {
 		if got := NiceCeil(c.v); math.Abs(got-c.want) > 1e-12 {
 			t.Errorf("NiceCeil(%g) = %g, want %g", c.v, got, c.want)
+		}
+	}
+}
+
+// outdoorAt is the demo node outdoors with a panel at a site, over two years.
+func outdoorAt(lat, lon float64, zone, preset string) scenario.Scenario {
+	s := scenario.Demo()
+	s.Site.LatDeg, s.Site.LonDeg, s.Site.Timezone = lat, lon, zone
+	s.Site.Placement, s.Site.Climate.Preset = scenario.Outdoor, preset
+	s.Harvest.Kind = scenario.HarvestPanel
+	s.Plan.Years = 2
+	return s
+}
+
+func TestChartShadesShortDays(t *testing.T) {
+	oslo := outdoorAt(59.91, 10.75, "Europe/Oslo", "cold-continental")
+	r := mustPlan(t, oslo)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, oslo.Plan.ReservePct, report.ShadingFor(oslo), fonts(t), Light(), 1)
+	// From 2027-03-01 for two years: the end of one winter, a whole one and
+	// the start of a third.
+	if len(v.ShortDays) != 3 {
+		t.Fatalf("%d shaded spans %v, want 3", len(v.ShortDays), v.ShortDays)
+	}
+	for i, sp := range v.ShortDays {
+		if sp.X0 < v.Plot.X || sp.X1 > v.Plot.Right() || sp.X1 <= sp.X0 {
+			t.Errorf("span %d %+v outside the plot %v or empty", i, sp, v.Plot)
+		}
+		if i > 0 && sp.X0 <= v.ShortDays[i-1].X1 {
+			t.Errorf("span %d %+v not right of %+v", i, sp, v.ShortDays[i-1])
+		}
+	}
+	// Midwinter is shaded, midsummer is not (the solstices, from memory).
+	shaded := func(day string) bool {
+		x := v.Time.DayX(date(day))
+		for _, sp := range v.ShortDays {
+			if sp.X0 <= x && x <= sp.X1 {
+				return true
+			}
+		}
+		return false
+	}
+	for _, d := range []string{"2027-03-05", "2027-12-21", "2028-12-21"} {
+		if !shaded(d) {
+			t.Errorf("%s not shaded in Oslo", d)
+		}
+	}
+	for _, d := range []string{"2027-06-21", "2028-06-20", "2027-04-15", "2028-09-01"} {
+		if shaded(d) {
+			t.Errorf("%s shaded in Oslo", d)
+		}
+	}
+	if !strings.Contains(joined(&v.Labels), "days under 12 h") {
+		t.Errorf("no legend entry for the shading: %q", joined(&v.Labels))
+	}
+	legend := 0
+	for _, it := range v.legend {
+		if it.kind == "short" {
+			legend++
+		}
+	}
+	if legend != 1 {
+		t.Errorf("%d legend swatches for the shading, want 1", legend)
+	}
+
+	// None in the tropics, none for an indoor node with no harvester, none
+	// when the caller passes no site.
+	tropics := outdoorAt(10, -1.5, "UTC", "humid-tropical")
+	indoor := scenario.Demo() // indoors in Oslo, no harvester
+	indoor.Plan.Years = 2
+	for name, c := range map[string]struct {
+		s    scenario.Scenario
+		site report.Shading
+	}{
+		"10° N outdoors": {tropics, report.ShadingFor(tropics)},
+		"indoor demo":    {indoor, report.ShadingFor(indoor)},
+		"no site":        {oslo, report.Shading{}},
+	} {
+		r := mustPlan(t, c.s)
+		v := layoutChart(Rect{300, 60, 620, 600}, r, c.s.Plan.ReservePct, c.site, fonts(t), Light(), 1)
+		if len(v.ShortDays) != 0 || strings.Contains(joined(&v.Labels), "days under 12 h") {
+			t.Errorf("%s: shaded spans %v, labels %q; want none", name, v.ShortDays, joined(&v.Labels))
+		}
+	}
+}
+
+func TestShortDaysColour(t *testing.T) {
+	// Faint, yet there: distinct from the panel; the grid still shows on
+	// it; and labels drawn over the plot keep 4.5:1 (WCAG 2.1 AA) on it.
+	for name, th := range map[string]Theme{"light": Light(), "dark": Dark()} {
+		p := th.Palette
+		if c := Contrast(p.ShortDays, p.Panel); c < 1.03 || c > 1.25 {
+			t.Errorf("%s: shading against the panel %.3f:1, want faint but visible (1.03 to 1.25)", name, c)
+		}
+		if c := Contrast(p.Grid, p.ShortDays); c < 1.05 {
+			t.Errorf("%s: grid on the shading %.3f:1, want at least 1.05", name, c)
+		}
+		for what, fg := range map[string]color.NRGBA{"ink": p.Ink, "secondary": p.InkSecondary, "reserve": p.Reserve, "swap": p.Swap, "flat": p.Flat} {
+			if c := Contrast(fg, p.ShortDays); c < 4.5 {
+				t.Errorf("%s: %s on the shading %.2f:1, want ≥ 4.5", name, what, c)
+			}
+		}
+	}
+}
+
+func TestChartNamesTheStart(t *testing.T) {
+	// The demo's 8 years from 2027-03-01: the axis names March 2027 at its
+	// left end, however wide the chart, and no two date labels touch.
+	s := scenario.Demo()
+	r := mustPlan(t, s)
+	for _, w := range []float64{360, 480, 620, 900, 1400} {
+		v := layoutChart(Rect{0, 0, w, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
+		if len(v.XTicks) == 0 || !v.XTicks[0].At.Equal(date(r.Start)) || v.XTicks[0].Label != "Mar 2027" {
+			t.Fatalf("%g px: ticks %v; want the first on the start, %s, labelled Mar 2027", w, v.XTicks, r.Start)
+		}
+		var boxes []Rect
+		for i, tk := range v.XTicks {
+			if i > 0 && tk.Pos-v.XTicks[i-1].Pos < minTickGapPx {
+				t.Errorf("%g px: ticks %s and %s %.1f px apart", w, v.XTicks[i-1].At.Format(time.DateOnly), tk.At.Format(time.DateOnly), tk.Pos-v.XTicks[i-1].Pos)
+			}
+			if tk.Label == "" {
+				continue
+			}
+			found := false
+			for _, tx := range v.Labels.texts {
+				if tx.s == tk.Label && tx.y > v.Plot.Bottom() && tx.role == roleSecondary {
+					boxes, found = append(boxes, tx.Bounds()), true
+					break
+				}
+			}
+			if !found {
+				t.Errorf("%g px: no label %q under the axis", w, tk.Label)
+			}
+		}
+		if len(boxes) == 0 || boxes[0].X != v.Plot.X {
+			t.Errorf("%g px: the start's label at %v, want its left edge on the plot's %g", w, boxes, v.Plot.X)
+		}
+		for i := 1; i < len(boxes); i++ {
+			if boxes[i].X < boxes[i-1].Right() {
+				t.Errorf("%g px: date labels %v and %v overlap", w, boxes[i-1], boxes[i])
+			}
+		}
+		if len(boxes) < 3 {
+			t.Errorf("%g px: only %d date labels", w, len(boxes))
 		}
 	}
 }

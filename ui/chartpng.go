@@ -7,6 +7,8 @@ import (
 	"math"
 
 	"github.com/hajimehoshi/ebiten/v2"
+
+	"nodelife/engine/report"
 )
 
 // The chart as a PNG: the export lays the chart out again at the origin, the
@@ -44,7 +46,7 @@ func (a *App) exportChartPNG() {
 		return
 	}
 	at := Rect{0, 0, r.W, r.H}
-	v := layoutChart(at, a.res, a.scen.Plan.ReservePct, a.fonts, a.theme, 1/a.scale)
+	v := layoutChart(at, a.res, a.scen.Plan.ReservePct, report.ShadingFor(a.scen), a.fonts, a.theme, 1/a.scale)
 	img := ebiten.NewImage(w, h)
 	defer img.Deallocate()
 	p := NewPainter(img, a.scale, a.fonts, a.white)

@@ -7,6 +7,7 @@ import (
 	"time"
 
 	"nodelife/engine/plan"
+	"nodelife/engine/report"
 )
 
 // marker is a dated mark above the plot with a label beside it.
@@ -28,6 +29,7 @@ type chartView struct {
 	SoC                LinearScale
 	Energy             LinearScale // Wh per day on the bars
 	XTicks, YTicks     []Tick
+	ShortDays          []report.XSpan // days under 12 h, shaded behind the plot
 	Cols               []Column
 	Months             []Month
 	HasHarvest         bool
@@ -41,7 +43,7 @@ type chartView struct {
 }
 
 type legendItem struct {
-	kind string // "band", "mean", "reserve", "harvest", "load"
+	kind string // "band", "mean", "short", "reserve", "harvest", "load"
 	at   Rect   // the swatch
 }
 
@@ -75,9 +77,12 @@ func (v *chartView) HoverArea() Rect {
 	return Rect{v.Plot.X, v.Plot.Y, v.Plot.W, bottom - v.Plot.Y}
 }
 
-// layoutChart lays out the chart of res, with its reserve line, in r. colW
-// is the width of one band column (one device pixel is sharpest).
-func layoutChart(r Rect, res plan.Result, reservePct float64, m Measurer, th Theme, colW float64) chartView {
+// layoutChart lays out the chart of res, with its reserve line, in r.
+// site shades the days under 12 h behind the plot when it asks for them
+// (report.ShadingFor(scenario) gives a scenario's; the SVG chart shades the
+// same days). colW is the width of one band column (one device pixel is
+// sharpest).
+func layoutChart(r Rect, res plan.Result, reservePct float64, site report.Shading, m Measurer, th Theme, colW float64) chartView {
 	v := chartView{Panel: r, days: res.Daily}
 	small := th.labelStyle()
 	title := th.headStyle()
@@ -87,7 +92,19 @@ func layoutChart(r Rect, res plan.Result, reservePct float64, m Measurer, th The
 	// Title, and the legend on the same row when it fits, else under the axis.
 	const socTitle = "State of charge, %"
 	v.Labels.text(m, socTitle, title, in.X, in.Y, AlignLeft, roleInk)
+	start, _ := time.Parse(time.DateOnly, res.Start)
+	end, _ := time.Parse(time.DateOnly, res.End)
+	// The days under 12 h, placed on a provisional axis first: whether any
+	// are on the chart decides the legend, which decides the plot's width.
+	var short []report.DaySpan
+	if site.ShortDays {
+		short = report.ShortDaySpans(res.Daily, site.LatDeg, site.LonDeg)
+	}
+	v.ShortDays = report.SpansX(res.Daily, short, TimeScale{Start: start, End: end, X0: 0, X1: 1})
 	socLegend := []legendName{{"band", "daily min–max"}, {"mean", "daily mean"}}
+	if len(v.ShortDays) > 0 {
+		socLegend = append(socLegend, legendName{"short", "days under 12 h"})
+	}
 	if reservePct > 0 {
 		socLegend = append(socLegend, legendName{"reserve", "reserve"})
 	}
@@ -127,11 +144,12 @@ func layoutChart(r Rect, res plan.Result, reservePct float64, m Measurer, th The
 	}
 	v.Plot = Rect{plotX, plotY, plotW, max(bottom-plotY, 0)}
 
-	start, _ := time.Parse(time.DateOnly, res.Start)
-	end, _ := time.Parse(time.DateOnly, res.End)
 	v.Time = TimeScale{Start: start, End: end, X0: v.Plot.X, X1: v.Plot.Right()}
 	v.SoC = LinearScale{V0: 0, V1: 100, Y0: v.Plot.Bottom(), Y1: v.Plot.Y}
-	v.XTicks = DateTicks(v.Time, minTickGapPx)
+	if len(v.ShortDays) > 0 {
+		v.ShortDays = report.SpansX(res.Daily, short, v.Time)
+	}
+	v.XTicks = DateAxis(v.Time, minTickGapPx, m, small)
 	v.YTicks = PercentTicks(v.SoC, 2*lh)
 	v.Cols = Columns(res.Daily, v.Time, colW)
 
@@ -145,6 +163,9 @@ func layoutChart(r Rect, res plan.Result, reservePct float64, m Measurer, th The
 		axisY = v.Strip.Bottom()
 	}
 	for _, t := range v.XTicks {
+		if t.Label == "" { // no room beside the label before it
+			continue
+		}
 		x := t.Pos
 		w := m.Advance(t.Label, small)
 		// Keep the first and last labels inside the plot's span.
@@ -377,6 +398,10 @@ func drawChart(p *Painter, v *chartView, th Theme) {
 	if plot.Empty() {
 		return
 	}
+	// The days under 12 h, under the grid and the curves.
+	for _, sp := range v.ShortDays {
+		p.Fill(Rect{sp.X0, plot.Y, sp.X1 - sp.X0, plot.H}, pal.ShortDays)
+	}
 	for _, t := range v.YTicks {
 		p.HLine(plot.X, plot.Right(), t.Pos, 1, pal.Grid)
 	}
@@ -462,6 +487,9 @@ func drawChart(p *Painter, v *chartView, th Theme) {
 			p.Fill(Rect{it.at.X, cy - 5, it.at.W, 10}, pal.Band)
 		case "mean":
 			p.HLine(it.at.X, it.at.Right(), cy, 2, pal.Mean)
+		case "short": // outlined: the fill alone is too faint to see as a swatch
+			p.Fill(Rect{it.at.X, cy - 5, it.at.W, 10}, pal.ShortDays)
+			p.Frame(Rect{it.at.X, cy - 5, it.at.W, 10}, 1, pal.Rule)
 		case "reserve":
 			p.DashedH(it.at.X, it.at.Right(), cy, 1, 6, 4, pal.Reserve)
 		case "harvest":

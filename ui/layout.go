@@ -3,6 +3,8 @@ package ui
 import (
 	"fmt"
 
+	"nodelife/engine/report"
+
 	"nodelife/engine/plan"
 )
 
@@ -15,6 +17,9 @@ const (
 	// Narrow: inputs | answer over chart over advice and cautions, scrolling.
 	Narrow
 )
+
+// In either mode the options view takes the place of the chart and the
+// answer; in the narrow one it takes the inputs' place too, for room.
 
 // Page geometry, CSS px, on the 8 px grid.
 const (
@@ -39,11 +44,12 @@ const (
 
 // Button is one of the header's actions.
 type Button struct {
-	ID      string // "open", "save", "export", "undo", "redo"
+	ID      string // "open", "save", "export", "options", "undo", "redo"; the options view's own
 	Label   string
 	At      Rect
 	Enabled bool
 	Hover   bool
+	Active  bool // a toggle that is on: the view it shows is showing
 }
 
 // PageContent is what a page shows besides the inputs.
@@ -57,7 +63,11 @@ type PageContent struct {
 	NoticeError bool   // … that reports a problem
 	CanUndo     bool
 	CanRedo     bool
-	SideScroll  float64 // how far the scrolling column is scrolled up
+	SideScroll  float64        // how far the scrolling column is scrolled up
+	Site        report.Shading // the season shading behind the chart
+	// Options, when not nil, is shown in the options view instead of the
+	// chart and the answer.
+	Options *OptionsContent
 }
 
 // Page is the whole screen laid out: the regions and the display lists of
@@ -76,6 +86,7 @@ type Page struct {
 	side                             displayList
 	chart                            chartView
 	hover                            hoverView
+	options                          *optionsView // the options view, when it shows
 }
 
 // LayoutPage arranges a screen of w × h CSS px. colW is the chart's band
@@ -123,6 +134,23 @@ func LayoutPage(w, h float64, c PageContent, m Measurer, th Theme, colW float64)
 	}
 
 	body = Rect{body.X + margin, body.Y + blockGap, body.W - 2*margin, body.H - blockGap - blockGap}
+	if c.Options != nil {
+		pg.Mode = Narrow
+		view := body
+		if w >= WideMin {
+			pg.Mode = Wide
+			fw := float64(formWideW)
+			if w >= formTwoColMin {
+				fw = formTwoColW
+			}
+			pg.Form, view = body.CutLeft(fw)
+			_, view = view.CutLeft(columnGap)
+		}
+		ov := layoutOptions(view, *c.Options, m, th)
+		pg.options = &ov
+		pg.Buttons = append(pg.Buttons, ov.Buttons...)
+		return pg
+	}
 	if w >= WideMin {
 		pg.Mode = Wide
 		fw := float64(formWideW)
@@ -158,7 +186,7 @@ func LayoutPage(w, h float64, c PageContent, m Measurer, th Theme, colW float64)
 		pg.Chart = blocks.Slot
 		pg.setSide(blocks)
 	}
-	pg.chart = layoutChart(pg.Chart, c.Result, c.ReservePct, m, th, colW)
+	pg.chart = layoutChart(pg.Chart, c.Result, c.ReservePct, c.Site, m, th, colW)
 	return pg
 }
 
@@ -176,7 +204,7 @@ const KeyHints = "Tab next · Enter applies · Esc cancels · ↑↓ step · Ctr
 
 // headerButtons are the header's actions, in order.
 var headerButtons = []struct{ id, label string }{
-	{"open", "Open…"}, {"save", "Save"}, {"export", "Export…"}, {"undo", "Undo"}, {"redo", "Redo"},
+	{"open", "Open…"}, {"save", "Save"}, {"export", "Export…"}, {"options", "Options"}, {"undo", "Undo"}, {"redo", "Redo"},
 }
 
 func (pg *Page) layoutHeader(c PageContent, m Measurer, th Theme) {
@@ -205,7 +233,8 @@ func (pg *Page) layoutHeader(c PageContent, m Measurer, th Theme) {
 		case "redo":
 			enabled = c.CanRedo
 		}
-		pg.Buttons = append([]Button{{ID: hb.id, Label: hb.label, At: r, Enabled: enabled}}, pg.Buttons...)
+		pg.Buttons = append([]Button{{ID: hb.id, Label: hb.label, At: r, Enabled: enabled,
+			Active: hb.id == "options" && c.Options != nil}}, pg.Buttons...)
 		right = r.X - buttonGap
 		if hb.id == "undo" {
 			right -= 8
@@ -241,6 +270,9 @@ func drawPage(p *Painter, pg *Page, th Theme) {
 	pal := th.Palette
 	p.Fill(pg.Screen, pal.Background)
 	drawList(p, &pg.header, pal)
+	if pg.options != nil {
+		drawList(p, &pg.options.list, pal)
+	}
 	for _, b := range pg.Buttons {
 		drawButton(p, b, th)
 	}
@@ -248,6 +280,9 @@ func drawPage(p *Painter, pg *Page, th Theme) {
 	if !pg.Notice.Empty() {
 		drawList(p, &pg.notice, pal)
 		p.Frame(pg.Dismiss, 1, pal.InkSecondary)
+	}
+	if pg.options != nil {
+		return
 	}
 	side := p.Clip(pg.Side)
 	if pg.Mode == Wide {
@@ -275,6 +310,10 @@ func drawButton(p *Painter, b Button, th Theme) {
 	if b.Hover && b.Enabled {
 		edge = pal.InkSecondary
 		p.Fill(b.At, pal.Panel)
+	}
+	if b.Active { // on: an accent frame and underline
+		edge = pal.Accent
+		p.Fill(Rect{b.At.X, b.At.Bottom() - 3, b.At.W, 3}, pal.Accent)
 	}
 	if !b.Enabled {
 		ink = pal.InkSecondary

@@ -34,6 +34,11 @@ type Palette struct {
 	Harvest      color.NRGBA // harvest bars (not text)
 	Load         color.NRGBA // load bars (not text)
 	Accent       color.NRGBA // energy bars, progress (not text)
+	// ShortDays shades the days under 12 h behind the chart's plot (not
+	// text): in Light the strip's cold blue at about 8 % over the panel, in
+	// Dark the page's background with a touch of it, a shade darker than the
+	// panel. Both are fainter than the grid, which shows on them.
+	ShortDays color.NRGBA
 	// The temperature strip: cold at −20 °C, Mild at 20 °C, hot at 45 °C.
 	TempCold, TempMild, TempHot color.NRGBA
 }
@@ -84,6 +89,7 @@ func Light() Theme {
 			Harvest:      hex(0xD99A2B),
 			Load:         hex(0x5B6770),
 			Accent:       hex(0x2A7F86),
+			ShortDays:    hex(0xF1F4F9), // as the SVG chart's (engine/report)
 			TempCold:     hex(0x4B7BB5),
 			TempMild:     hex(0xE9E6DF),
 			TempHot:      hex(0xC0563F),
@@ -115,6 +121,7 @@ func Dark() Theme {
 			Harvest:      hex(0xE8B24E),
 			Load:         hex(0x9AA5AE),
 			Accent:       hex(0x3FA7AF),
+			ShortDays:    hex(0x141A21),
 			TempCold:     hex(0x4B7BB5),
 			TempMild:     hex(0x2A2F35),
 			TempHot:      hex(0xC0563F),

@@ -183,6 +183,9 @@ type appDebug struct {
 	Hover  string `json:"hover"`
 	Chart  rect   `json:"chart"`
 	Panel  rect   `json:"panel"` // the chart's whole panel
+	// Options are the options view's columns while it shows.
+	Options        []string `json:"options"`
+	OptionsProblem string   `json:"options_problem"`
 }
 
 func debugState(t testing.TB, ctx context.Context) appDebug {
@@ -450,4 +453,23 @@ func demoWith(t testing.TB, values map[string]any) []byte {
 		t.Fatal(errors.New("demoWith: " + err.Error()))
 	}
 	return data
+}
+
+// typeValue types value into the input at path with real key events and
+// applies it with Enter.
+func typeValue(t testing.TB, ctx context.Context, path, value string) {
+	t.Helper()
+	if debugState(t, ctx).Focus != "" { // a click on a focused field places the caret: let go of it first
+		key(t, ctx, "Escape", "Escape", 27)
+		waitFor(t, ctx, `nodelife.debug().focus === ""`, "Escape to let go of the field")
+	}
+	click(t, ctx, scrollInto(t, ctx, path))
+	waitFor(t, ctx, fmt.Sprintf(`(d => d.focus === %q && d.selected)(nodelife.debug())`, path), "the field "+path+" selected")
+	key(t, ctx, "Backspace", "Backspace", 8)
+	if _, err := chromedp.Run(ctx, chromedp.KeyEvent(value)); err != nil {
+		t.Fatal(err)
+	}
+	waitFor(t, ctx, fmt.Sprintf(`nodelife.debug().text === %q`, value), "the typed "+value)
+	key(t, ctx, "Enter", "Enter", 13)
+	waitFor(t, ctx, fmt.Sprintf(`nodelife.debug().values[%q] === %q`, path, value), path+" applied")
 }

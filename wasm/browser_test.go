@@ -421,12 +421,34 @@ func TestBrowser(t *testing.T) {
 			t.Errorf("the exported chart starts %.60q", svg)
 		}
 		if s, err := scenario.Parse(saved); err != nil || s.Name != openedName {
-			t.Errorf("the saved file %v: name %q (%v), want the scenario on screen", keysOfFiles(files), s.Name, err)
+			t.Errorf("the saved file %v: name %q (%v), want the scenario on screen", namesOf(files), s.Name, err)
 		}
 		if !strings.Contains(string(exported), `"format":"nodelife.result/1"`) {
 			t.Errorf("the exported result starts %.60q", exported)
 		}
 		checkChartPNG(t, pic, d, "browser-export-chart-1280x720")
+	})
+
+	t.Run("compare options side by side", func(t *testing.T) {
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `(o => o && o.length === 1)(nodelife.debug().options)`, "the options view")
+		click(t, ctx, debugState(t, ctx).Buttons["keep"])
+		waitFor(t, ctx, `(o => o && o.length === 2)(nodelife.debug().options)`, "the kept option beside the current one")
+		typeValue(t, ctx, "cells.parallel", "3")
+		waitFor(t, ctx, `nodelife.scenario().cells.parallel === 3 && /Option A/.test(document.getElementById("summary").textContent)`,
+			"the comparison in the live region after 3 cells in parallel")
+		if d := debugState(t, ctx); d.OptionsProblem != "" || len(d.Options) != 2 {
+			t.Errorf("options %v, problem %q", d.Options, d.OptionsProblem)
+		}
+		drawn(t, ctx)
+		screenshot(t, ctx, "browser-options-1280x720")
+		resize(t, ctx, 1920, 1080)
+		drawn(t, ctx)
+		screenshot(t, ctx, "browser-options-1920x1080")
+		resize(t, ctx, 1280, 720)
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `nodelife.debug().options === null`, "the chart again")
+		typeValue(t, ctx, "cells.parallel", "2")
 	})
 
 	t.Run("a reload finds the autosaved scenario", func(t *testing.T) {
@@ -492,6 +514,21 @@ func TestBrowser(t *testing.T) {
 		for _, data := range waitFiles(t, dl, 1) {
 			checkChartPNG(t, data, d, "browser-export-chart-760x900@2x")
 		}
+		// The options view takes the whole width; the inputs come back
+		// with the chart.
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `(o => o && o.length === 1)(nodelife.debug().options)`, "the options view")
+		if d := debugState(t, ctx); len(d.Fields) != 0 {
+			t.Errorf("the narrow options view shows inputs %v", namesOf(d.Fields))
+		}
+		click(t, ctx, debugState(t, ctx).Buttons["keep"])
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `nodelife.debug().options === null`, "the chart and the inputs again")
+		typeValue(t, ctx, "cells.parallel", "3")
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `(o => o && o.length === 2)(nodelife.debug().options)`, "two options side by side")
+		drawn(t, ctx)
+		screenshot(t, ctx, "browser-options-760x900@2x")
 	})
 
 	t.Run("opens offline from the service worker", func(t *testing.T) {
@@ -555,13 +592,13 @@ func waitFiles(t *testing.T, dir string, n int) map[string][]byte {
 			return files
 		}
 		if time.Now().After(deadline) {
-			t.Fatalf("downloads: %v, want %d files", keysOfFiles(files), n)
+			t.Fatalf("downloads: %v, want %d files", namesOf(files), n)
 		}
 		time.Sleep(50 * time.Millisecond)
 	}
 }
 
-func keysOfFiles(m map[string][]byte) []string {
+func namesOf[V any](m map[string]V) []string {
 	var ks []string
 	for k := range m {
 		ks = append(ks, k)

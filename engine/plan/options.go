@@ -160,7 +160,7 @@ func Compare(options []Option) (Comparison, error) {
 			return Comparison{}, &OptionError{Index: i, Name: name(i), Path: "plan.years", Err: ErrHorizon,
 				Value: strconv.Itoa(s.Plan.Years), Other: -1, Allowed: "at least 1 year"}
 		}
-		c.Options = append(c.Options, optionCost(name(i), s, o.Result))
+		c.Options = append(c.Options, CostOf(name(i), s, o.Result))
 	}
 	cheap, long := bestOptions(c.Options, costKey), bestOptions(c.Options, lifeKey)
 	c.Cheapest, c.LongestLasting = optionNames(c.Options, cheap), optionNames(c.Options, long)
@@ -168,8 +168,9 @@ func Compare(options []Option) (Comparison, error) {
 	return c, nil
 }
 
-// optionCost applies the formulas of Compare to one option.
-func optionCost(name string, s scenario.Scenario, r Result) OptionCost {
+// CostOf applies the formulas of Compare to one option: its answer and cost
+// of ownership in its own currency, for a view that shows one option alone.
+func CostOf(name string, s scenario.Scenario, r Result) OptionCost {
 	o := OptionCost{
 		Name: name, Chemistry: s.Cells.Chemistry, Form: s.Cells.Form,
 		Harvester:    s.Harvest.Kind,
