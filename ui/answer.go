@@ -190,8 +190,8 @@ type sideBlocks struct {
 	Progress                         Rect // the advice's progress bar, or empty
 }
 
-// layoutSide lays out the answer, the advice, the energy by component and the
-// cautions one under the other from r.Y in r's width, and returns them and
+// layoutSide lays out the answer, the cautions, the advice and the energy by
+// component one under the other from r.Y in r's width, and returns them and
 // the height they take. A slot of slotH (for the chart) is left after the
 // answer when slotH > 0.
 func layoutSide(a Answer, st AdviceStatus, r Rect, slotH float64, m Measurer, th Theme) (sideBlocks, float64) {
@@ -204,18 +204,20 @@ func layoutSide(a Answer, st AdviceStatus, r Rect, slotH float64, m Measurer, th
 		sb.Slot = Rect{r.X, y, r.W, slotH}
 		y += slotH + blockGap
 	}
+	// The cautions come before the advice: they are short, and a reader
+	// must not miss them below the fold.
+	var cl displayList
+	cl, h = layoutCautions(a.Cautions, Rect{r.X, y, r.W, 0}, m, th)
+	if h > 0 {
+		sb.Cautions = Rect{r.X, y, r.W, h}
+		sb.list.boxes = append(sb.list.boxes, cl.boxes...)
+		sb.list.texts = append(sb.list.texts, cl.texts...)
+		y += h + blockGap
+	}
 	sb.Advice, sb.Progress, h = layoutAdvice(&sb.list, a, st, Rect{r.X, y, r.W, 0}, m, th)
 	y += h + blockGap
 	sb.Energy, h = layoutEnergy(&sb.list, a, Rect{r.X, y, r.W, 0}, m, th)
 	y += h
-	var cl displayList
-	cl, h = layoutCautions(a.Cautions, Rect{r.X, y + blockGap, r.W, 0}, m, th)
-	if h > 0 {
-		sb.Cautions = Rect{r.X, y + blockGap, r.W, h}
-		sb.list.boxes = append(sb.list.boxes, cl.boxes...)
-		sb.list.texts = append(sb.list.texts, cl.texts...)
-		y += blockGap + h
-	}
 	return sb, y - r.Y
 }
 

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"nodelife/engine/cell"
@@ -66,6 +67,18 @@ func specsFor(s scenario.Scenario) []groupSpec {
 	default:
 		site = append(site, fieldSpec{"site.indoor_temp_c", "Indoor temperature", ctlNumber, 1, nil})
 	}
+	// The costs of ownership the options view adds up; the harvester's
+	// only with a harvester.
+	cost := []fieldSpec{
+		{"cost.currency", "Currency", ctlDrop, 0, nil},
+		{"cost.cell", "Cell price", ctlNumber, 1, nil},
+		{"cost.visit", "Visit cost", ctlNumber, 10, nil},
+	}
+	if s.Harvest.Kind != scenario.HarvestNone {
+		cost = append(cost,
+			fieldSpec{"cost.panel", "Harvester, fixed", ctlNumber, 1, nil},
+			fieldSpec{"cost.panel_per_cm2", "Harvester per cm²", ctlNumber, 0.05, nil})
+	}
 	harvest := []fieldSpec{{"harvest.kind", "Harvester", ctlSegments, 0, nil}}
 	switch s.Harvest.Kind {
 	case scenario.HarvestPanel:
@@ -96,8 +109,29 @@ func specsFor(s scenario.Scenario) []groupSpec {
 			{"plan.years", "Plan length", ctlNumber, 1, nil},
 			{"plan.reserve_pct", "Swap reserve", ctlNumber, 1, nil},
 		}},
+		{"Cost", cost},
 	}
 }
+
+// unitFor is the unit an input's box shows: the field's, degrees for the
+// position, and the currency for a cost.
+func unitFor(s scenario.Scenario, path string) string {
+	switch path {
+	case pathPosition:
+		return "°"
+	case "cost.panel_per_cm2":
+		return s.Cost.Currency + "/cm²"
+	case "cost.cell", "cost.visit", "cost.panel":
+		return s.Cost.Currency
+	}
+	f, _ := scenario.FieldByPath(path)
+	return f.Unit
+}
+
+// currencies are the currency list's choices: ISO 4217 codes of the
+// currencies most trade is invoiced in (common practice); a file may name
+// any other, which the list then offers too.
+var currencies = []string{"EUR", "USD", "GBP", "CHF", "NOK", "SEK", "DKK", "PLN", "JPY", "CNY", "INR", "CAD", "AUD"}
 
 // Short names of the chemistries for the box (the list shows the full name):
 // the trade's shorthand by active materials (common practice).
@@ -158,6 +192,15 @@ func optionsFor(s scenario.Scenario, path string) []Option {
 				short = c.ID
 			}
 			opts = append(opts, Option{Value: c.ID, Label: short, Detail: c.Name})
+		}
+		return opts
+	case "cost.currency":
+		var opts []Option
+		for _, c := range currencies {
+			opts = append(opts, Option{Value: c, Label: c})
+		}
+		if !slices.Contains(currencies, s.Cost.Currency) {
+			opts = append(opts, Option{Value: s.Cost.Currency, Label: s.Cost.Currency, Detail: "from the file"})
 		}
 		return opts
 	case "cells.form":
@@ -232,6 +275,7 @@ var helpLines = map[string]string{
 	"node.radio.class":    "message energy: per radio, fixed, or in the wake",
 	"harvest.kind":        "a solar panel outdoors or an indoor-light cell",
 	"plan.reserve_pct":    "swap the cells at this state of charge",
+	"cost.currency":       "the currency of every cost below",
 }
 
 // Short lines for the profiles, by ID: what the node does, the first clause

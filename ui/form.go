@@ -195,11 +195,9 @@ func newRow(s scenario.Scenario, sp fieldSpec) *Row {
 			t.Mode = ZoneText
 		}
 		if sf, ok := scenario.FieldByPath(sp.path); ok {
-			t.Unit, t.Min, t.Max, t.Integer = sf.Unit, sf.Min, sf.Max, sf.Kind == scenario.Integer
+			t.Min, t.Max, t.Integer = sf.Min, sf.Max, sf.Kind == scenario.Integer
 		}
-		if sp.ctl == ctlPosition {
-			t.Unit = "°"
-		}
+		t.Unit = unitFor(s, sp.path)
 		t.SetValue(v)
 		r.Text = t
 		if sp.stops != nil {
@@ -227,6 +225,7 @@ func (f *Form) Sync(s scenario.Scenario) {
 		v := valueText(s, r.Path)
 		r.Help = helpText(s, r.Path)
 		if r.Text != nil {
+			r.Text.Unit = unitFor(s, r.Path) // a cost's follows the currency
 			r.Text.SetValue(v)
 			if r.Slider != nil && !r.Slider.Dragging {
 				r.Slider.Value, _ = parseNumber(v)
@@ -779,7 +778,7 @@ func drawForm(p *Painter, f *Form, th Theme) {
 		track := f.View.H
 		thumb := max(track*f.View.H/f.Content, 24)
 		y := f.View.Y + (track-thumb)*f.ScrollY/(f.Content-f.View.H)
-		p.Fill(Rect{f.View.Right() + 4, y, 3, thumb}, pal.Rule)
+		p.Fill(Rect{f.View.Right() + 4, y, 3, thumb}, pal.InkSecondary) // 3:1 and more against the page, as a control needs
 	}
 }
 

@@ -1,9 +1,14 @@
 package ui
 
 import (
+	"runtime"
+
 	"github.com/hajimehoshi/ebiten/v2"
 	"github.com/hajimehoshi/ebiten/v2/inpututil"
 )
+
+// wheelLinePx is how far one line of the wheel scrolls a column, CSS px.
+const wheelLinePx = 40
 
 // Key is a special key the widgets act on.
 type Key int
@@ -109,6 +114,12 @@ func ReadInput(scale float64) Input {
 	}
 
 	_, in.WheelY = ebiten.Wheel()
+	if runtime.GOOS == "js" {
+		// A browser's wheel event comes in CSS px (about 100 a notch), not
+		// lines: scale it to the widgets' 40 px lines, so a notch scrolls
+		// about 100 px rather than to the end of the column.
+		in.WheelY /= wheelLinePx
+	}
 	in.Shift = ebiten.IsKeyPressed(ebiten.KeyShift)
 	command := ebiten.IsKeyPressed(ebiten.KeyControl) || ebiten.IsKeyPressed(ebiten.KeyMeta)
 	for _, k := range inpututil.AppendPressedKeys(nil) {

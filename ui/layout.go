@@ -297,7 +297,7 @@ func drawPage(p *Painter, pg *Page, th Theme) {
 		track := pg.Side.H
 		thumb := max(track*pg.Side.H/pg.SideContent, 24)
 		y := pg.Side.Y + (track-thumb)*pg.SideScroll/(pg.SideContent-pg.Side.H)
-		p.Fill(Rect{pg.Side.Right() + scrollBarSide, y, 3, thumb}, pal.Rule)
+		p.Fill(Rect{pg.Side.Right() + scrollBarSide, y, 3, thumb}, pal.InkSecondary) // 3:1 and more against the page, as a control needs
 	}
 }
 

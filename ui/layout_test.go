@@ -38,10 +38,14 @@ func TestLayoutRegions(t *testing.T) {
 				}
 			}
 		}
-		// The blocks of the scrolling column follow each other.
-		blocks := []Rect{pg.Answer, pg.Advice, pg.Energy, pg.Cautions}
+		// The blocks of the scrolling column follow each other, the
+		// cautions straight after the answer (and the chart).
+		blocks := []Rect{pg.Answer, pg.Cautions, pg.Advice, pg.Energy}
 		if pg.Mode == Narrow {
-			blocks = []Rect{pg.Answer, pg.Chart, pg.Advice, pg.Energy, pg.Cautions}
+			blocks = []Rect{pg.Answer, pg.Chart, pg.Cautions, pg.Advice, pg.Energy}
+		}
+		if pg.Mode == Wide && (pg.Cautions.Empty() || pg.Cautions.Bottom() > pg.Side.Bottom()) {
+			t.Errorf("%gx%g: the cautions %v are not all in view in the column %v", sz[0], sz[1], pg.Cautions, pg.Side)
 		}
 		for i := 1; i < len(blocks); i++ {
 			if blocks[i].Y < blocks[i-1].Bottom()+blockGap-0.5 || blocks[i].X != pg.Side.X {

@@ -211,3 +211,43 @@ func TestDifferences(t *testing.T) {
 	c.Name = "another name"
 	assert.Equal(t, "other settings differ from Current", differences(a, c))
 }
+
+func TestAppCostInputs(t *testing.T) {
+	a, _ := newHosted(t)
+	d := a.Debug()
+	require.Contains(t, d.Values, "cost.cell")
+	assert.NotContains(t, d.Values, "cost.panel", "no harvester, no harvester costs")
+	assert.Equal(t, "EUR", d.Values["cost.currency"])
+	assert.Equal(t, "EUR", a.form.Row("cost.visit").Text.Unit)
+
+	// A dearer cell shows in the options' costs.
+	button(t, a, "options")
+	button(t, a, "keep")
+	typeInto(t, a, "cost.cell", "20")
+	_, cmp, err := a.optionsContent().compare()
+	require.NoError(t, err)
+	cells := float64(a.scen.Cells.Series * a.scen.Cells.Parallel * (1 + len(a.res.Swaps)))
+	assert.InDelta(t, 20*cells, cmp.Options[1].CostCells, 1e-9)
+	assert.InDelta(t, 9*cells, cmp.Options[0].CostCells, 1e-9, "the kept option keeps its price")
+
+	// Another currency: the units follow, and the options can no longer
+	// be compared (the kept one is in EUR).
+	tabTo(t, a, "cost.currency")
+	a.step(keys(KeyEnter))
+	click(a, a.Debug().List.Items["USD"])
+	assert.Equal(t, "USD", a.scen.Cost.Currency)
+	assert.Equal(t, "USD", a.form.Row("cost.cell").Text.Unit)
+	assert.Contains(t, a.Debug().OptionsProblem, "cost.currency")
+
+	// A panel brings its costs, in the currency per cm² too.
+	tabTo(t, a, "harvest.kind")
+	a.step(keys(KeyDown))
+	require.NotEqual(t, scenario.HarvestNone, a.scen.Harvest.Kind)
+	assert.Equal(t, "USD/cm²", a.form.Row("cost.panel_per_cm2").Text.Unit)
+
+	// A currency the list lacks, from a file, is offered as it is.
+	s := scenario.Demo()
+	s.Cost.Currency = "ISK"
+	opts := optionsFor(s, "cost.currency")
+	assert.Equal(t, "ISK", opts[len(opts)-1].Value)
+}
