@@ -162,10 +162,12 @@ type Debug struct {
 		Items map[string]Rect `json:"items"`
 	} `json:"list"`
 	Buttons map[string]Rect `json:"buttons"` // the header's enabled actions
-	Menu    map[string]Rect `json:"menu"`    // the open menu's items by action
-	Undo    int             `json:"undo"`    // steps that can be undone
-	Redo    int             `json:"redo"`    // … and redone
-	Advice  struct {
+	// FocusButton is the ID of the button with the keyboard, or "".
+	FocusButton string          `json:"focus_button"`
+	Menu        map[string]Rect `json:"menu"` // the open menu's items by action
+	Undo        int             `json:"undo"` // steps that can be undone
+	Redo        int             `json:"redo"` // … and redone
+	Advice      struct {
 		State string `json:"state"` // "waiting", "running", "done" or "failed"
 		Done  int    `json:"done"`
 		Total int    `json:"total"`
@@ -224,6 +226,9 @@ func (a *App) Debug() Debug {
 		if b.Enabled {
 			d.Buttons[b.ID] = b.At
 		}
+	}
+	if a.btnFocus >= 0 {
+		d.FocusButton = a.page.Buttons[a.btnFocus].ID
 	}
 	if m := a.menu; m != nil {
 		d.Menu = map[string]Rect{}

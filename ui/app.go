@@ -4,7 +4,10 @@ import (
 	"bytes"
 	"encoding/json"
 	"fmt"
+	"math"
 	"runtime/debug"
+	"slices"
+	"sort"
 	"sync"
 	"time"
 
@@ -67,6 +70,7 @@ type App struct {
 	}
 	advice     adviceJob
 	menu       *Choice      // the open header menu, or nil
+	btnFocus   int          // the page button with the keyboard (index into page.Buttons), or -1
 	kept       []keptOption // scenarios kept to compare with this one
 	showOpts   bool         // the options view is showing
 	notice     string
@@ -119,7 +123,7 @@ func New(o Options) (*App, error) {
 		}
 	}
 	a := &App{theme: o.Theme, fonts: fonts, onFirst: o.OnFirstFrame, w: 1280, h: 720, scale: 1, host: o.Host,
-		notice: o.Notice, noticeErr: o.NoticeError, hoverStale: true}
+		notice: o.Notice, noticeErr: o.NoticeError, hoverStale: true, btnFocus: -1}
 	a.mouseX, a.mouseY = -1, -1
 	a.form = NewForm(s)
 	a.redraw.commit(time.Now())
@@ -178,8 +182,10 @@ func (a *App) layout() {
 		oc := a.optionsContent()
 		c.Options = &oc
 	}
+	old := a.page.Buttons
 	a.page = LayoutPage(a.w, a.h, c, a.fonts, a.theme, 1/a.scale)
 	a.sideScroll = a.page.SideScroll
+	a.keepButtonFocus(old)
 	a.layoutForm()
 	a.hoverStale = true
 	a.dirty = true
@@ -248,6 +254,10 @@ func (a *App) step(in *Input) {
 	}
 	in.Keys = keys
 
+	// A press anywhere but on the focused button lets go of it.
+	if in.Pressed && a.btnFocus >= 0 && !a.page.Buttons[a.btnFocus].At.Contains(in.MouseX, in.MouseY) {
+		a.focusButton(-1)
+	}
 	// An open menu takes the pointer and keys first.
 	if a.menuStep(in) {
 		a.hover(in.MouseX, in.MouseY)
@@ -272,13 +282,29 @@ func (a *App) step(in *Input) {
 		}
 	}
 
+	// The focused button takes its keys; the inputs get the rest.
+	a.buttonKeys(in)
+
 	var changed bool
 	var edit *Edit
 	if !a.page.Form.Empty() {
+		a.form.Exits = len(tabOrder(a.page.Buttons)) > 0
 		changed, edit = a.form.Update(in)
 	}
 	if edit != nil {
 		a.form.Settle(a.apply(*edit), a.scen)
+		changed = true
+	}
+	// Tab past the last input (or Shift+Tab before the first), once the
+	// input has let go, goes on to the buttons.
+	if dir := a.form.TakeExit(); dir != 0 {
+		if order := tabOrder(a.page.Buttons); len(order) > 0 {
+			i := order[0]
+			if dir < 0 {
+				i = order[len(order)-1]
+			}
+			a.focusButton(i)
+		}
 		changed = true
 	}
 	if changed {
@@ -288,13 +314,204 @@ func (a *App) step(in *Input) {
 
 	// The scrolling column.
 	if in.WheelY != 0 && a.page.Side.Contains(in.MouseX, in.MouseY) && a.form.OpenList() == nil {
-		if y := clampScroll(a.sideScroll-in.WheelY*40, a.page.SideContent, a.page.Side.H); y != a.sideScroll {
+		if y := clampScroll(a.sideScroll-in.WheelY*wheelLinePx, a.page.SideContent, a.page.Side.H); y != a.sideScroll {
 			a.sideScroll = y
 			a.layout()
 		}
 	}
 	a.hover(in.MouseX, in.MouseY)
 	a.maybeStartAdvice()
+}
+
+// The keyboard's Tab order is the header's buttons left to right, then the
+// options view's while it shows, in reading order (keep and back, then each
+// column's Edit and Remove), then the inputs while they show, and round
+// again; Shift+Tab goes the other way. Disabled buttons are skipped. With
+// nothing focused, Tab still starts at the first input and Shift+Tab at the
+// last, as before the buttons joined the order: the inputs are what the
+// keyboard is mostly for, and people and tests rely on it. So Shift+Tab from
+// the first input reaches the last button and Tab from the last input the
+// first header button. On a focused button Enter or Space acts, Escape lets
+// go of it; a mouse press anywhere else lets go of it too. Only one thing
+// has the keyboard: a button or an input.
+
+// tabOrder lists the enabled buttons of bs in Tab order: by reading order,
+// top to bottom, then left to right (the options view lays its buttons out
+// from the right, so their order in bs is not the reading order).
+func tabOrder(bs []Button) []int {
+	var order []int
+	for i, b := range bs {
+		if b.Enabled {
+			order = append(order, i)
+		}
+	}
+	sort.SliceStable(order, func(p, q int) bool {
+		r, s := bs[order[p]].At, bs[order[q]].At
+		if math.Abs(r.Y-s.Y) > 1 { // a row's buttons share their top
+			return r.Y < s.Y
+		}
+		return r.X < s.X
+	})
+	return order
+}
+
+// focusButton gives the keyboard to page button i, or to none with -1. A
+// focused input lets go first: callers move the focus here only once the
+// input has nothing typed to commit (Tab out of the rows commits, as Tab
+// between rows does, before TakeExit reports it).
+func (a *App) focusButton(i int) {
+	if i >= 0 && a.form.Focused() != nil {
+		a.form.Blur()
+		a.layoutForm() // its help shrinks back to one line
+	}
+	a.markButton(i)
+}
+
+// markButton notes page button i (or none, -1) as the one with the keyboard,
+// for step and for the focus ring.
+func (a *App) markButton(i int) {
+	for j := range a.page.Buttons {
+		a.page.Buttons[j].Focused = j == i
+	}
+	a.btnFocus, a.dirty = i, true
+}
+
+// keepButtonFocus finds the focused button again after a layout replaced
+// old, the buttons before: the one with the same ID (the same one of two
+// alike, as the header's Options and the view's Back to the chart, else
+// the first alike), else the next enabled one in the old Tab order that is
+// still there, else none.
+func (a *App) keepButtonFocus(old []Button) {
+	i := a.btnFocus
+	a.btnFocus = -1
+	if i < 0 || i >= len(old) {
+		return
+	}
+	// nth is which of the buttons with its ID button k of bs is.
+	nth := func(bs []Button, k int) int {
+		n := 0
+		for j := range k {
+			if bs[j].ID == bs[k].ID {
+				n++
+			}
+		}
+		return n
+	}
+	// find is the n-th new button with id, if it is enabled, or -1.
+	find := func(id string, n int) int {
+		for j, b := range a.page.Buttons {
+			if b.ID != id {
+				continue
+			}
+			if n == 0 {
+				if b.Enabled {
+					return j
+				}
+				return -1
+			}
+			n--
+		}
+		return -1
+	}
+	j := find(old[i].ID, nth(old, i))
+	if j < 0 {
+		j = find(old[i].ID, 0)
+	}
+	if j < 0 {
+		order := tabOrder(old)
+		for _, k := range order[slices.Index(order, i)+1:] {
+			if j = find(old[k].ID, nth(old, k)); j >= 0 {
+				break
+			}
+		}
+	}
+	a.markButton(j)
+}
+
+// buttonKeys gives this tick's keys to the focused button: Tab and
+// Shift+Tab move along the Tab order, Enter or Space act, Escape lets go.
+// Keys after one that moved the focus into the inputs stay in in for them;
+// the rest are taken out. While the inputs are hidden (the narrow options
+// view) and nothing is focused, Tab starts at the buttons.
+func (a *App) buttonKeys(in *Input) {
+	if a.btnFocus < 0 {
+		if a.page.Form.Empty() && in.Has(KeyTab) {
+			if order := tabOrder(a.page.Buttons); len(order) > 0 {
+				i := order[0]
+				if in.Shift {
+					i = order[len(order)-1]
+				}
+				a.focusButton(i)
+			}
+			in.Keys, in.Chars = nil, nil
+		}
+		return
+	}
+	var rest []Key
+	for n, k := range in.Keys {
+		if a.menu != nil {
+			break // it opened: it has the keyboard from the next tick
+		}
+		if a.btnFocus < 0 {
+			rest = in.Keys[n:]
+			break
+		}
+		switch k {
+		case KeyTab:
+			a.tabFromButton(in.Shift)
+		case KeyEnter:
+			a.pressButton()
+		case KeyEscape:
+			a.focusButton(-1)
+		}
+	}
+	if a.btnFocus >= 0 && a.menu == nil && slices.Contains(in.Chars, ' ') {
+		a.pressButton()
+	}
+	in.Keys = rest
+	if a.form.Focused() == nil {
+		in.Chars = nil
+	}
+}
+
+// pressButton acts as a click on the focused button. A menu opened so has
+// its first item highlighted, so Enter picks something at once.
+func (a *App) pressButton() {
+	a.act(a.page.Buttons[a.btnFocus].ID) // may lay the page out again
+	if a.menu != nil {
+		a.menu.Highlight = 0
+	}
+}
+
+// tabFromButton moves the focus from the focused button to the next one in
+// the Tab order (the previous one with back); past either end to the first
+// or last input while the inputs show, else round the buttons.
+func (a *App) tabFromButton(back bool) {
+	order := tabOrder(a.page.Buttons)
+	pos := slices.Index(order, a.btnFocus)
+	next := pos + 1
+	if back {
+		next = pos - 1
+	}
+	if next >= 0 && next < len(order) {
+		a.markButton(order[next])
+		return
+	}
+	if !a.page.Form.Empty() && len(a.form.Rows) > 0 {
+		a.markButton(-1)
+		row := 0
+		if back {
+			row = len(a.form.Rows) - 1
+		}
+		a.form.FocusRow(row)
+		a.layoutForm() // the row's help grows to its full text
+		return
+	}
+	if back {
+		a.markButton(order[len(order)-1])
+	} else {
+		a.markButton(order[0])
+	}
 }
 
 // hover lays out the chart's read-out for the pointer at x, y.

@@ -117,6 +117,12 @@ type Form struct {
 	// revealAfterLayout scrolls the focused row into view at the next
 	// layout, which gives it its full help.
 	revealAfterLayout bool
+	// Exits makes Tab on the last row and Shift+Tab on the first leave the
+	// rows instead of going round them, so the page's buttons can take the
+	// keyboard (the app sets it; a form on its own goes round). TakeExit
+	// tells which way the focus left.
+	Exits  bool
+	exited int // +1 after the last row, -1 before the first, 0 when not out
 }
 
 // place puts the open list beside its row.
@@ -369,7 +375,7 @@ func (f *Form) Update(in *Input) (changed bool, edit *Edit) {
 	}
 	// Scrolling.
 	if in.WheelY != 0 && f.View.Contains(mx, my) && f.open < 0 {
-		if f.scrollTo(f.ScrollY - in.WheelY*40) {
+		if f.scrollTo(f.ScrollY - in.WheelY*wheelLinePx) {
 			changed = true
 		}
 	}
@@ -550,12 +556,22 @@ func (f *Form) Settle(reason string, s scenario.Scenario) {
 	}
 }
 
+// doMove moves the focus at once: to the next or previous row (round the
+// ends, or out of the rows with Exits), to row target, or off the rows.
 func (f *Form) doMove(move focusMove, target int) {
 	n := len(f.Rows)
 	switch move {
 	case moveNext:
+		if f.Exits && f.focus == n-1 {
+			f.exit(+1)
+			return
+		}
 		f.focusOn((f.focus + 1) % n)
 	case movePrev:
+		if f.Exits && f.focus == 0 {
+			f.exit(-1)
+			return
+		}
 		f.focusOn((f.focus + n - 1) % n)
 	case moveTo:
 		f.focusOn(target)
@@ -568,6 +584,30 @@ func (f *Form) doMove(move focusMove, target int) {
 	}
 }
 
+// exit lets go of the focused row as a click outside the rows does, and
+// notes the way out (+1 forward, -1 back) for TakeExit.
+func (f *Form) exit(dir int) {
+	f.doMove(moveBlur, -1)
+	f.exited = dir
+}
+
+// TakeExit reports whether the focus left the rows by Tab (+1) or
+// Shift+Tab (-1) since the last call, or 0, and forgets it.
+func (f *Form) TakeExit() int {
+	d := f.exited
+	f.exited = 0
+	return d
+}
+
+// FocusRow gives row i the keyboard, as Tab arriving at it does, letting go
+// of the focused row (the caller makes sure that holds no typed edit).
+func (f *Form) FocusRow(i int) { f.focusOn(i) }
+
+// Blur takes the keyboard off the rows at once: a typed value not yet
+// committed stays in its row as typed; Cancel drops it.
+func (f *Form) Blur() { f.doMove(moveBlur, -1) }
+
+// focusOn gives row i the keyboard and scrolls it into view.
 func (f *Form) focusOn(i int) {
 	if r := f.Focused(); r != nil {
 		r.blur()

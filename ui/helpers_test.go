@@ -45,10 +45,11 @@ func click(a *App, r Rect) {
 	a.step(release(x, y))
 }
 
-// tabTo presses Tab until the input at path has the keyboard.
+// tabTo presses Tab until the input at path has the keyboard. Tab goes
+// round the inputs and the page's buttons, so once round is enough.
 func tabTo(t *testing.T, a *App, path string) {
 	t.Helper()
-	for range len(a.form.Rows) + 1 {
+	for range len(a.form.Rows) + len(a.page.Buttons) + 1 {
 		if r := a.form.Focused(); r != nil && r.Path == path {
 			return
 		}

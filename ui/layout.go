@@ -50,6 +50,7 @@ type Button struct {
 	Enabled bool
 	Hover   bool
 	Active  bool // a toggle that is on: the view it shows is showing
+	Focused bool // it has the keyboard: Enter or Space acts
 }
 
 // PageContent is what a page shows besides the inputs.
@@ -302,7 +303,7 @@ func drawPage(p *Painter, pg *Page, th Theme) {
 }
 
 // drawButton paints a header button: a framed label, darker while hovered,
-// quiet when it cannot act.
+// quiet when it cannot act, ringed while it has the keyboard.
 func drawButton(p *Painter, b Button, th Theme) {
 	pal := th.Palette
 	small := th.labelStyle()
@@ -319,5 +320,19 @@ func drawButton(p *Painter, b Button, th Theme) {
 		ink = pal.InkSecondary
 	}
 	p.Frame(b.At, 1, edge)
+	if b.Focused {
+		// The ring goes outside the frame, a pixel off it, so it reads as
+		// the fields' focus colour without hiding the label, the frame or
+		// an active toggle's underline. Buttons are buttonGap apart, so it
+		// never touches a neighbour.
+		p.Frame(b.At.Inset(-focusRingOut), focusRingW, pal.Focus)
+	}
 	p.Text(b.Label, small, b.At.X+b.At.W/2, b.At.Y+(b.At.H-small.LineHeight())/2, AlignCenter, ink)
 }
+
+// A focused button's ring: its width, and how far its outer edge stands
+// off the button's frame, CSS px.
+const (
+	focusRingW   = 2
+	focusRingOut = 3
+)

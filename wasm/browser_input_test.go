@@ -172,9 +172,11 @@ type appDebug struct {
 		Items map[string]rect `json:"items"`
 	} `json:"list"`
 	Buttons map[string]rect `json:"buttons"`
-	Undo    int             `json:"undo"`
-	Redo    int             `json:"redo"`
-	Advice  struct {
+	// FocusButton is the ID of the button with the keyboard, or "".
+	FocusButton string `json:"focus_button"`
+	Undo        int    `json:"undo"`
+	Redo        int    `json:"redo"`
+	Advice      struct {
 		State string `json:"state"`
 		Done  int    `json:"done"`
 		Total int    `json:"total"`

@@ -277,6 +277,60 @@ func TestBrowser(t *testing.T) {
 		}
 	})
 
+	t.Run("Tab to a header button and export by keyboard", func(t *testing.T) {
+		if debugState(t, ctx).Focus != "" {
+			key(t, ctx, "Escape", "Escape", 27)
+		}
+		dl := t.TempDir()
+		if _, err := chromedp.CallBrowser(ctx, browser.SetDownloadBehavior, browser.SetDownloadBehaviorParams{
+			Behavior: browser.SetDownloadBehaviorBehaviorAllow, DownloadPath: dl}); err != nil {
+			t.Fatal(err)
+		}
+		// Tab starts at the first input; Shift+Tab from there goes back
+		// along the header's buttons, right to left.
+		key(t, ctx, "Tab", "Tab", 9)
+		if d := debugState(t, ctx); d.Focus == "" || d.FocusButton != "" {
+			t.Fatalf("Tab with nothing focused: input %q, button %q; want the first input", d.Focus, d.FocusButton)
+		}
+		var seen []string
+		for len(seen) < 6 && (len(seen) == 0 || seen[len(seen)-1] != "export") {
+			chord(t, ctx, modShift, "Tab", "Tab", 9)
+			d := debugState(t, ctx)
+			if d.Focus != "" || d.FocusButton == "" {
+				t.Fatalf("Shift+Tab after %v: input %q, button %q; want a header button alone", seen, d.Focus, d.FocusButton)
+			}
+			seen = append(seen, d.FocusButton)
+		}
+		if seen[len(seen)-1] != "export" {
+			t.Fatalf("Shift+Tab from the first input went through %v, never to export", seen)
+		}
+		t.Logf("Shift+Tab from the first input: %v", seen)
+		drawn(t, ctx)
+		screenshot(t, ctx, "browser-focus-button-1280x720")
+		checkFocusRing(t, "browser-focus-button-1280x720", debugState(t, ctx).Buttons["export"])
+
+		// Enter opens the menu on its first item, Down moves to the chart's
+		// SVG, Enter exports it.
+		key(t, ctx, "Enter", "Enter", 13)
+		waitFor(t, ctx, `!!nodelife.debug().menu`, "Enter on Export… to open its menu")
+		key(t, ctx, "ArrowDown", "ArrowDown", 40)
+		key(t, ctx, "Enter", "Enter", 13)
+		files := waitFiles(t, dl, 1)
+		if len(files) != 1 {
+			t.Errorf("downloads %v, want one", namesOf(files))
+		}
+		for name, data := range files {
+			if !strings.HasSuffix(name, "-chart.svg") || !strings.Contains(string(data[:min(len(data), 200)]), "<svg") {
+				t.Errorf("Down, Enter in the export menu downloaded %s (%.40q), want the chart's SVG", name, data)
+			}
+		}
+		if d := debugState(t, ctx); d.FocusButton != "export" {
+			t.Errorf("after the export: button %q has the keyboard, want export", d.FocusButton)
+		}
+		key(t, ctx, "Escape", "Escape", 27)
+		waitFor(t, ctx, `(d => d.focus_button === "" && d.focus === "" && !d.menu)(nodelife.debug())`, "Escape to let go of the button")
+	})
+
 	t.Run("advice works in the background without freezing the page", func(t *testing.T) {
 		// Outdoors in the far north with a panel: the advice draws weather
 		// years and searches panel and cell sizes, many runs.
@@ -570,6 +624,41 @@ func checkChartPNG(t *testing.T, data []byte, d appDebug, name string) {
 	wantW, wantH := int(math.Round(d.Panel.W*d.Scale)), int(math.Round(d.Panel.H*d.Scale))
 	if b := img.Bounds(); b.Dx() != wantW || b.Dy() != wantH || wantW < 300 {
 		t.Errorf("the chart's PNG is %d × %d, want the panel %v at %g×: %d × %d", b.Dx(), b.Dy(), d.Panel, d.Scale, wantW, wantH)
+	}
+}
+
+// checkFocusRing checks the screenshot name (in outDir, taken at scale 1)
+// for the focus ring around button b: the ring's colour in the gap over the
+// button's top edge, and the page's background further out.
+func checkFocusRing(t *testing.T, name string, b rect) {
+	t.Helper()
+	f, err := os.Open(filepath.Join(outDir, name+".png"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	img, err := png.Decode(f)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near := func(x, y float64, want [3]int) bool {
+		r, g, bl, _ := img.At(int(x), int(y)).RGBA()
+		got := [3]int{int(r >> 8), int(g >> 8), int(bl >> 8)}
+		for i := range got {
+			if d := got[i] - want[i]; d < -24 || d > 24 {
+				return false
+			}
+		}
+		return true
+	}
+	ring := [3]int{0x1F, 0x6B, 0x72}       // the light theme's focus colour
+	background := [3]int{0xF6, 0xF4, 0xEF} // … and its page
+	x := b.X + b.W/2
+	if !near(x, b.Y-2, ring) || !near(b.X-2, b.Y+b.H/2, ring) {
+		t.Errorf("%s: no focus ring just outside the button at %v", name, b)
+	}
+	if !near(x, b.Y-6, background) {
+		t.Errorf("%s: the ring around %v is wider than it should be", name, b)
 	}
 }
 
