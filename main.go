@@ -228,12 +228,8 @@ func readInputs(s scenario.Scenario, scenarioPath string, stdin bool) (plan.Inpu
 		return in, usageError{fmt.Sprintf("site.weather_file: %v", err)}
 	}
 	defer f.Close()
-	switch strings.ToLower(filepath.Ext(p)) {
-	case ".epw":
-		in.Weather, err = weather.ReadEPW(p, f)
-	case ".csv":
-		in.Weather, err = weather.ReadTMY3(p, f)
-	default:
+	in.Weather, err = weather.Read(p, f)
+	if errors.Is(err, weather.ErrNotWeather) {
 		return in, usageError{fmt.Sprintf("site.weather_file: %q is not a weather file (allowed: a TMY3 file ending .csv or an EPW file ending .epw)", s.Site.WeatherFile)}
 	}
 	if err != nil {

@@ -322,3 +322,21 @@ func abs(x int) int {
 	}
 	return x
 }
+
+// ErrNotWeather reports a file name that is neither a TMY3 (.csv) nor an EPW
+// (.epw) file.
+var ErrNotWeather = errors.New("not a weather file")
+
+// Read reads a weather file by its name's extension, case-insensitively:
+// ".epw" with ReadEPW, ".csv" with ReadTMY3. Any other name gives an error
+// wrapping ErrNotWeather that says what is allowed.
+func Read(file string, in io.Reader) (*Series, error) {
+	ext := strings.ToLower(file[strings.LastIndexAny(file, `/\`)+1:])
+	switch {
+	case strings.HasSuffix(ext, ".epw"):
+		return ReadEPW(file, in)
+	case strings.HasSuffix(ext, ".csv"):
+		return ReadTMY3(file, in)
+	}
+	return nil, fmt.Errorf("%q is %w (allowed: a TMY3 file ending .csv or an EPW file ending .epw)", file, ErrNotWeather)
+}

@@ -1,6 +1,7 @@
 package weather
 
 import (
+	"bytes"
 	"errors"
 	"math"
 	"os"
@@ -144,4 +145,30 @@ func TestParseErrorsNameLineColumnAndValue(t *testing.T) {
 	assert.Contains(t, err.Error(), `(dry bulb temperature): "-120.2" is out of range`)
 	_, err = ReadEPW("c.epw", strings.NewReader("NOT,AN,EPW\n"))
 	assert.ErrorContains(t, err, "is not the LOCATION line")
+}
+
+func TestReadByName(t *testing.T) {
+	epw, err := os.ReadFile("testdata/nsrdb-tmy3-725300-chicago-ohare.epw")
+	if err != nil {
+		t.Fatal(err)
+	}
+	// The extension picks the reader, in any case: the EPW reader takes the
+	// file, the TMY3 reader refuses it (its first line is no TMY3 metadata).
+	for _, c := range []struct {
+		name string
+		ok   bool
+	}{{"ohare.epw", true}, {"C:\\weather\\OHARE.EPW", true}, {"ohare.csv", false}} {
+		s, err := Read(c.name, bytes.NewReader(epw))
+		if (err == nil) != c.ok {
+			t.Errorf("Read(%q): err %v, want ok %v", c.name, err, c.ok)
+		}
+		if c.ok && (s == nil || len(s.Records) < 8760) {
+			t.Errorf("Read(%q): no hourly records", c.name)
+		}
+	}
+	for _, name := range []string{"ohare.txt", "epw", "weather.epw/notes"} {
+		if _, err := Read(name, bytes.NewReader(epw)); !errors.Is(err, ErrNotWeather) || !strings.Contains(err.Error(), "allowed: a TMY3 file ending .csv or an EPW file ending .epw") {
+			t.Errorf("Read(%q): %v, want ErrNotWeather with what is allowed", name, err)
+		}
+	}
 }
