@@ -101,23 +101,32 @@
     setTimeout(() => URL.revokeObjectURL(url), 60000);
   }
 
-  // Files: the picker and drops on the page hand the file to the app, which
-  // reports a bad one in the page.
+  // Files: the picker and drops on the page hand the files to the app, which
+  // tells scenarios (JSON) from weather files (EPW, TMY3 CSV) by their names
+  // and reports a bad one in the page.
   const picker = document.createElement("input");
   picker.type = "file";
-  picker.accept = ".json,application/json";
+  picker.accept = ".json,.epw,.csv,application/json,text/csv";
+  picker.multiple = true;
   picker.hidden = true;
   picker.id = "nodelife-file";
   picker.addEventListener("change", () => {
-    if (picker.files.length) openFile(picker.files[0]);
+    openFiles(picker.files);
     picker.value = "";
   });
   document.body.append(picker);
 
-  async function openFile(file) {
+  // openFiles opens scenarios before weather files: a scenario that names a
+  // weather file waits for it and opens when it comes, so the two can come
+  // together; a weather file alone goes to the scenario on screen.
+  async function openFiles(list) {
     if (!bridge) return;
-    const body = await file.text();
-    bridge.open(body, file.name);
+    const weather = (f) => /\.(epw|csv)$/i.test(f.name);
+    const files = Array.from(list || []).sort((a, b) => weather(a) - weather(b));
+    for (const file of files) {
+      const body = await file.text();
+      bridge.open(body, file.name);
+    }
   }
 
   const dropHint = document.getElementById("drop");
@@ -137,7 +146,7 @@
     if (!hasFiles(e)) return;
     e.preventDefault();
     if (dropHint) dropHint.hidden = true;
-    if (e.dataTransfer.files.length) openFile(e.dataTransfer.files[0]);
+    openFiles(e.dataTransfer.files);
   });
 
   // Paste: ebiten cancels the canvas's key events, which stops the browser's

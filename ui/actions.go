@@ -77,7 +77,7 @@ var exportOptionsItem = Option{Value: "export-options", Label: "Options", Detail
 
 // openItems are the open menu's entries.
 var openItems = []Option{
-	{Value: "open-file", Label: "Scenario file…", Detail: "JSON; or drop it on the page"},
+	{Value: "open-file", Label: "Scenario or weather file…", Detail: "JSON, EPW or TMY3; or drop it on the page"},
 	{Value: "open-demo", Label: "The demo", Detail: "an invented store's shelf watcher"},
 }
 

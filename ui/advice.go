@@ -48,7 +48,7 @@ func (a *App) maybeStartAdvice() {
 	j.done = make(chan struct{})
 	j.status = AdviceStatus{State: AdviceRunning}
 	gen, done := j.gen, j.done
-	s, r, in := a.scen, a.res, a.planner.Inputs
+	s, r, in := a.scen, a.res, a.inputsFor(a.scen)
 	r.Advice = nil
 	go func() {
 		defer close(done)

@@ -55,10 +55,22 @@ func (a *App) Load(data []byte) ([]byte, error) {
 // Open shows a scenario file the user chose (by the file picker or by
 // dropping it on the page), named name. A bad file is reported across the
 // page, with the engine's words, and the scenario stays as it was.
+//
+// A file named .epw or .csv is a weather file (openWeather).
 func (a *App) Open(data []byte, name string) error {
 	a.mu.Lock()
 	defer a.flush()
-	if err := a.open(data); err != nil {
+	if isWeatherName(name) {
+		if err := a.openWeather(data, name); err != nil {
+			a.setNotice(fmt.Sprintf("%s could not be used. %s", name, err), true)
+			return err
+		}
+		return nil
+	}
+	if err := a.open(data); needsWeather(err) {
+		a.waitForWeather(data, name)
+		return err
+	} else if err != nil {
 		a.setNotice(fmt.Sprintf("%s could not be opened. %s", name, err), true)
 		return err
 	}
@@ -73,7 +85,7 @@ func (a *App) open(data []byte) error {
 	if err != nil {
 		return err
 	}
-	r, err := a.planner.Run(s)
+	r, err := a.run(s)
 	if err != nil {
 		return err
 	}

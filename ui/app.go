@@ -16,6 +16,7 @@ import (
 	"nodelife/engine/plan"
 	"nodelife/engine/report"
 	"nodelife/engine/scenario"
+	"nodelife/engine/weather"
 )
 
 // Host is the page around the app: what the app asks of it. Its methods are
@@ -69,10 +70,12 @@ type App struct {
 		from   scenario.Scenario // the scenario before the drag
 	}
 	advice     adviceJob
-	menu       *Choice      // the open header menu, or nil
-	btnFocus   int          // the page button with the keyboard (index into page.Buttons), or -1
-	kept       []keptOption // scenarios kept to compare with this one
-	showOpts   bool         // the options view is showing
+	menu       *Choice                    // the open header menu, or nil
+	btnFocus   int                        // the page button with the keyboard (index into page.Buttons), or -1
+	kept       []keptOption               // scenarios kept to compare with this one
+	weather    map[string]*weather.Series // weather files given this visit, by weatherKey
+	waiting    *waiting                   // a scenario file waiting for its weather file
+	showOpts   bool                       // the options view is showing
 	notice     string
 	noticeErr  bool
 	sideScroll float64
@@ -125,12 +128,25 @@ func New(o Options) (*App, error) {
 	a := &App{theme: o.Theme, fonts: fonts, onFirst: o.OnFirstFrame, w: 1280, h: 720, scale: 1, host: o.Host,
 		notice: o.Notice, noticeErr: o.NoticeError, hoverStale: true, btnFocus: -1}
 	a.mouseX, a.mouseY = -1, -1
-	a.form = NewForm(s)
 	a.redraw.commit(time.Now())
-	r, err := a.planner.Run(s)
+	r, err := a.run(s)
+	if needsWeather(err) {
+		// The kept scenario names a weather file a new page does not have:
+		// show the demo, and open the scenario when the file is dropped.
+		// The page is not told of the demo, so the kept one stays kept.
+		a.form = NewForm(scenario.Demo())
+		if r, err = a.run(scenario.Demo()); err != nil {
+			return nil, err
+		}
+		a.setScenario(scenario.Demo(), r)
+		a.outbox = nil
+		a.waitForWeather(o.Scenario, "The kept scenario")
+		return a, nil
+	}
 	if err != nil {
 		return nil, err
 	}
+	a.form = NewForm(s)
 	a.setScenario(s, r)
 	return a, nil
 }
@@ -561,7 +577,7 @@ func (a *App) apply(e Edit) string {
 	} else if !e.Drag {
 		a.history.Record(a.scen)
 	}
-	r, err := a.planner.Run(s)
+	r, err := a.run(s)
 	if err != nil {
 		return reason(err, e.Path)
 	}
@@ -588,7 +604,7 @@ func (a *App) undo(redo bool) {
 		return
 	}
 	a.redraw.commit(time.Now())
-	r, err := a.planner.Run(s)
+	r, err := a.run(s)
 	if err != nil {
 		a.setNotice("That step cannot be shown: "+err.Error(), true)
 		return

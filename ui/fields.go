@@ -56,12 +56,16 @@ func specsFor(s scenario.Scenario) []groupSpec {
 		{"site.timezone", "Time zone", ctlZone, 0, nil},
 		{"site.placement", "Placement", ctlSegments, 0, nil},
 	}
+	if s.Site.WeatherFile != "" {
+		site = append(site, fieldSpec{"site.weather_file", "Weather", ctlDrop, 0, nil})
+	}
 	switch s.Site.Placement {
 	case scenario.Fixed:
 		site = append(site, fieldSpec{"site.fixed_temp_c", "Room temperature", ctlNumber, 1, nil})
 	case scenario.Outdoor:
 		site = append(site, fieldSpec{"site.climate.preset", "Climate", ctlDrop, 0, nil})
-		if s.Site.Climate.Preset == "none" && s.Site.Climate.TminC == nil {
+		// The air's mean is the climate's; a weather file brings its own.
+		if s.Site.Climate.Preset == "none" && s.Site.Climate.TminC == nil && s.Site.WeatherFile == "" {
 			site = append(site, fieldSpec{"site.outdoor_mean_c", "Outdoor mean", ctlNumber, 1, nil})
 		}
 	default:
@@ -194,6 +198,13 @@ func optionsFor(s scenario.Scenario, path string) []Option {
 			opts = append(opts, Option{Value: c.ID, Label: short, Detail: c.Name})
 		}
 		return opts
+	case "site.weather_file":
+		// The file the scenario names, or none: another file is dropped
+		// on the page.
+		return []Option{
+			{Value: s.Site.WeatherFile, Label: weatherKey(s.Site.WeatherFile), Detail: "hourly weather from the file"},
+			{Value: "", Label: "climate normals", Detail: "no weather file"},
+		}
 	case "cost.currency":
 		var opts []Option
 		for _, c := range currencies {
@@ -276,6 +287,7 @@ var helpLines = map[string]string{
 	"harvest.kind":        "a solar panel outdoors or an indoor-light cell",
 	"plan.reserve_pct":    "swap the cells at this state of charge",
 	"cost.currency":       "the currency of every cost below",
+	"site.weather_file":   "a TMY3 or EPW file dropped on the page",
 }
 
 // Short lines for the profiles, by ID: what the node does, the first clause

@@ -22,7 +22,7 @@ type helpCase struct {
 // helpCases are scenarios that between them show every help text the form
 // has: each placement, climate preset (and none), node profile (and
 // custom), radio, chemistry with each of its form factors at the rated
-// capacity, a typed capacity, and each harvester.
+// capacity, a typed capacity, each harvester, and a weather file.
 func helpCases() []helpCase {
 	var cs []helpCase
 	add := func(name string, change func(*scenario.Scenario)) {
@@ -57,6 +57,7 @@ func helpCases() []helpCase {
 	for _, k := range []string{scenario.HarvestNone, scenario.HarvestPanel, scenario.HarvestIndoor} {
 		add("harvest "+k, func(s *scenario.Scenario) { s.Harvest.Kind = k })
 	}
+	add("weather file", func(s *scenario.Scenario) { s.Site.WeatherFile = "weather/a-long-station-name-tmy3.epw" })
 	return cs
 }
 

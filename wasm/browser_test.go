@@ -433,6 +433,29 @@ func TestBrowser(t *testing.T) {
 		if d := debugState(t, ctx); !strings.HasPrefix(d.Notice, "Opened two-cells.json") || d.Values["cells.parallel"] != "2" {
 			t.Errorf("after opening: notice %q, parallel %q", d.Notice, d.Values["cells.parallel"])
 		}
+
+		// A scenario and the weather file it names, picked together: the
+		// weather is read first and the scenario opens with it. The test
+		// file is the engine's (engine/weather/testdata/SOURCE.md).
+		epw, err := filepath.Abs("../engine/weather/testdata/nsrdb-tmy3-725300-chicago-ohare.epw")
+		if err != nil {
+			t.Fatal(err)
+		}
+		yard := demoWith(t, map[string]any{"name": "yard with hourly weather", "site.placement": "outdoor",
+			"harvest.kind": "panel", "site.weather_file": filepath.Base(epw)})
+		yardFile := filepath.Join(dir, "yard.json")
+		os.WriteFile(yardFile, yard, 0o644)
+		if _, err := chromedp.Run(ctx, chromedp.SetUploadFiles(chromedp.ID("nodelife-file"), []string{yardFile, epw})); err != nil {
+			t.Fatal(err)
+		}
+		waitFor(t, ctx, `nodelife.scenario().name === "yard with hourly weather"`, "the scenario that names a weather file, opened with it")
+		if d := debugState(t, ctx); !strings.Contains(d.Notice, "Opened yard.json with") || d.Values["site.weather_file"] != filepath.Base(epw) {
+			t.Errorf("after opening with weather: notice %q, weather row %q", d.Notice, d.Values["site.weather_file"])
+		}
+		drawn(t, ctx)
+		screenshot(t, ctx, "browser-weather-file-1280x720")
+		chord(t, ctx, modCtrl, "z", "KeyZ", 90)
+		waitFor(t, ctx, `nodelife.scenario().name === `+jsString(openedName), "undo back to the picked file")
 	})
 
 	t.Run("save and export download files", func(t *testing.T) {
