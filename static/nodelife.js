@@ -35,6 +35,7 @@
 
   const SAVED = "nodelife.scenario";        // the scenario on screen
   const SET_ASIDE = "nodelife.scenario.bad"; // a kept scenario that did not open
+  const OPTIONS = "nodelife.options";       // the options kept for comparison
 
   const status = document.getElementById("status");
   let bridge = null; // the Go side's functions, once the app is running
@@ -217,6 +218,27 @@
           return (s && s.getItem(SAVED)) || "";
         } catch (e) {
           return "";
+        }
+      },
+    },
+    _savedOptions: {
+      value: () => {
+        const s = storage();
+        try {
+          return (s && s.getItem(OPTIONS)) || "";
+        } catch (e) {
+          return "";
+        }
+      },
+    },
+    _keepOptions: {
+      value: (json) => {
+        const s = storage();
+        try {
+          if (s && json) s.setItem(OPTIONS, json);
+          else if (s) s.removeItem(OPTIONS);
+        } catch (e) {
+          console.warn("nodelife: the options could not be kept in this browser:", e);
         }
       },
     },

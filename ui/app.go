@@ -31,6 +31,9 @@ type Host interface {
 	// PickFile lets the user choose a scenario file, which the page hands
 	// to App.Open.
 	PickFile()
+	// KeepOptions keeps the options kept for comparison for the next visit
+	// (Options.KeptOptions), or forgets them when data is nil.
+	KeepOptions(data []byte)
 }
 
 // Options configure an App. The zero value shows the demo in the light theme.
@@ -43,6 +46,10 @@ type Options struct {
 	// saved scenario could not be opened; NoticeError marks it a problem.
 	Notice      string
 	NoticeError bool
+	// KeptOptions are the options kept at the last visit, as
+	// Host.KeepOptions was given them; nil for none. Those that no longer
+	// open are reported in the notice and left out.
+	KeptOptions []byte
 	// OnFirstFrame, if set, is called once after the first frame is drawn.
 	OnFirstFrame func()
 	// Host is the page; nil for none (downloads and the file picker do
@@ -147,6 +154,7 @@ func New(o Options) (*App, error) {
 		return nil, err
 	}
 	a.form = NewForm(s)
+	a.restoreOptions(o.KeptOptions)
 	a.setScenario(s, r)
 	return a, nil
 }
@@ -631,13 +639,19 @@ func (a *App) Update() (err error) {
 	in.Chars = append(in.Chars, a.pasted...)
 	a.pasted = nil
 	a.step(&in)
-	if shape := a.cursorShape(in.MouseX, in.MouseY); shape != a.cursor {
-		a.cursor = shape
-		ebiten.SetCursorShape(shape)
+	shape, newShape := a.cursorShape(in.MouseX, in.MouseY), false
+	if shape != a.cursor {
+		a.cursor, newShape = shape, true
 	}
 	calls := a.outbox
 	a.outbox = nil
 	a.mu.Unlock()
+	// Calls into ebiten and the page are made without the lock: a
+	// JavaScript callback into the app (nodelife.debug(), a paste) waits
+	// for the lock and holds the browser's event loop while it waits.
+	if newShape {
+		ebiten.SetCursorShape(shape)
+	}
 	for _, c := range calls {
 		c()
 	}
@@ -681,6 +695,7 @@ func (a *App) cursorShape(x, y float64) ebiten.CursorShapeType {
 func (a *App) Draw(screen *ebiten.Image) {
 	a.mu.Lock()
 	first := false
+	var png *pendingPNG
 	func() {
 		defer func() {
 			if r := recover(); r != nil {
@@ -695,7 +710,7 @@ func (a *App) Draw(screen *ebiten.Image) {
 		}
 		if a.wantPNG {
 			a.wantPNG = false
-			a.exportChartPNG()
+			png = a.paintChartPNG()
 		}
 		p := NewPainter(screen, a.scale, a.fonts, a.white)
 		drawPage(p, &a.page, a.theme)
@@ -713,6 +728,9 @@ func (a *App) Draw(screen *ebiten.Image) {
 		a.drawn = true
 	}()
 	a.mu.Unlock()
+	if png != nil {
+		a.finishChartPNG(png) // reads pixels back: without the lock, as Update's calls
+	}
 	if first && a.onFirst != nil {
 		a.onFirst()
 	}

@@ -16,6 +16,7 @@ type host struct {
 	summaries []string
 	downloads []string // name: first bytes
 	picks     int
+	options   []string // what KeepOptions was given, in order
 }
 
 func (h *host) Changed(s []byte, summary string) {
@@ -25,7 +26,8 @@ func (h *host) Changed(s []byte, summary string) {
 func (h *host) Download(name, mime string, data []byte) {
 	h.downloads = append(h.downloads, name+": "+string(data[:min(len(data), 40)]))
 }
-func (h *host) PickFile() { h.picks++ }
+func (h *host) PickFile()               { h.picks++ }
+func (h *host) KeepOptions(data []byte) { h.options = append(h.options, string(data)) }
 
 // newHosted is the demo app with a recording host, laid out at 1280×720.
 func newHosted(t *testing.T) (*App, *host) {

@@ -36,28 +36,43 @@ func encodePNG(pix []byte, w, h int) ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
-// exportChartPNG paints the chart alone and queues it as a download. Call
-// from Draw with a.mu held.
-func (a *App) exportChartPNG() {
+// pendingPNG is the chart painted for export, to be read back.
+type pendingPNG struct {
+	img  *ebiten.Image
+	w, h int
+	name string
+}
+
+// paintChartPNG paints the chart alone on an image of its own, or says why
+// it cannot and returns nil. Call from Draw with a.mu held.
+func (a *App) paintChartPNG() *pendingPNG {
 	r := a.page.Chart
 	w, h := chartPixels(r, a.scale)
 	if w <= 0 || h <= 0 {
 		a.setNotice("The chart has no room on screen to export.", true)
-		return
+		return nil
 	}
 	at := Rect{0, 0, r.W, r.H}
 	v := layoutChart(at, a.res, a.scen.Plan.ReservePct, report.ShadingFor(a.scen), a.fonts, a.theme, 1/a.scale)
 	img := ebiten.NewImage(w, h)
-	defer img.Deallocate()
 	p := NewPainter(img, a.scale, a.fonts, a.white)
 	p.Fill(at, a.theme.Palette.Background)
 	drawChart(p, &v, a.theme)
-	pix := make([]byte, 4*w*h)
-	img.ReadPixels(pix)
-	data, err := encodePNG(pix, w, h)
+	return &pendingPNG{img: img, w: w, h: h, name: fileName(a.scen.Name, "-chart.png")}
+}
+
+// finishChartPNG reads the painted chart back and queues it as a download.
+// Call from Draw without a.mu: reading pixels waits for the GPU.
+func (a *App) finishChartPNG(p *pendingPNG) {
+	defer p.img.Deallocate()
+	pix := make([]byte, 4*p.w*p.h)
+	p.img.ReadPixels(pix)
+	data, err := encodePNG(pix, p.w, p.h)
+	a.mu.Lock()
+	defer a.mu.Unlock()
 	if err != nil {
 		a.setNotice("The chart could not be exported: "+err.Error(), true)
 		return
 	}
-	a.download(fileName(a.scen.Name, "-chart.png"), "image/png", data)
+	a.download(p.name, "image/png", data)
 }

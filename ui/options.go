@@ -36,14 +36,8 @@ const currentName = "Current"
 
 // nextLetter is the first of A, B, C that no kept option has, or "".
 func nextLetter(kept []keptOption) string {
-	for _, l := range []string{"A", "B", "C"} {
-		used := false
-		for _, k := range kept {
-			used = used || k.Letter == l
-		}
-		if !used {
-			return l
-		}
+	if l := nextLetters(kept); l != "" {
+		return l[:1]
 	}
 	return ""
 }
@@ -418,6 +412,7 @@ func (a *App) keep() {
 	a.showOpts = true
 	a.notice, a.noticeErr = "", false
 	a.changed()
+	a.keepOptions()
 	a.layout()
 }
 
@@ -428,6 +423,7 @@ func (a *App) removeKept(i int) {
 	}
 	a.kept = append(a.kept[:i:i], a.kept[i+1:]...)
 	a.changed()
+	a.keepOptions()
 	a.layout()
 }
 
@@ -440,6 +436,7 @@ func (a *App) editKept(i int) {
 	}
 	k := a.kept[i]
 	a.kept[i] = keptOption{Letter: k.Letter, Scen: a.scen, Res: a.res}
+	a.keepOptions()
 	a.history.Record(a.scen)
 	a.redraw.commit(time.Now())
 	a.notice, a.noticeErr = fmt.Sprintf("Editing what was %s; the scenario you were editing is now %s.", k.Name(), k.Name()), false
@@ -465,4 +462,109 @@ func (a *App) exportOptions() {
 		}
 		a.download(fileName(a.scen.Name, "-options.json"), "application/json", append(data, '\n'))
 	}
+}
+
+// keptFormat names the kept options' format in the page's storage.
+const keptFormat = "nodelife.options/1"
+
+// keptFile is the kept options as the page keeps them between visits: each
+// option's letter and scenario file (its result is planned again).
+type keptFile struct {
+	Format  string `json:"format"`
+	Options []struct {
+		Letter   string          `json:"letter"`
+		Scenario json.RawMessage `json:"scenario"`
+	} `json:"options"`
+}
+
+// keepOptions hands the kept options to the page for the next visit. Call
+// with a.mu held.
+func (a *App) keepOptions() {
+	if a.host == nil {
+		return
+	}
+	var data []byte
+	if len(a.kept) > 0 {
+		f := keptFile{Format: keptFormat}
+		for _, k := range a.kept {
+			f.Options = append(f.Options, struct {
+				Letter   string          `json:"letter"`
+				Scenario json.RawMessage `json:"scenario"`
+			}{k.Letter, k.Scen.JSON()})
+		}
+		var err error
+		if data, err = json.Marshal(f); err != nil {
+			panic("ui: kept options do not marshal: " + err.Error())
+		}
+	}
+	a.outbox = append(a.outbox, func() { a.host.KeepOptions(data) })
+}
+
+// restoreOptions plans again the options kept at the last visit. Any that
+// no longer opens (a scenario the engine now refuses, a weather file the
+// page does not have) is left out and named in the notice, with why. Call
+// with a.mu held, before the current scenario is set.
+func (a *App) restoreOptions(data []byte) {
+	if len(data) == 0 {
+		return
+	}
+	var f keptFile
+	if err := json.Unmarshal(data, &f); err != nil || f.Format != keptFormat {
+		why := fmt.Sprintf("format is not %s", keptFormat)
+		if err != nil {
+			why = err.Error()
+		}
+		a.addNotice("The options kept in this browser could not be read, so none are shown ("+why+").", true)
+		return
+	}
+	var lost []string
+	for i, o := range f.Options {
+		name := fmt.Sprintf("option %d", i+1)
+		switch {
+		case len(a.kept) >= maxKept:
+			lost = append(lost, name+" (at most "+fmt.Sprint(plan.MaxOptions)+" options)")
+			continue
+		case len(o.Letter) != 1 || !strings.Contains(nextLetters(a.kept), o.Letter):
+			lost = append(lost, fmt.Sprintf("%s (letter %q; allowed: A, B or C, once each)", name, o.Letter))
+			continue
+		}
+		name = "option " + o.Letter
+		s, err := scenario.Parse(o.Scenario)
+		var r plan.Result
+		if err == nil {
+			r, err = a.run(s)
+		}
+		if err != nil {
+			lost = append(lost, fmt.Sprintf("%s (%v)", name, err))
+			continue
+		}
+		a.kept = append(a.kept, keptOption{Letter: o.Letter, Scen: s, Res: r})
+	}
+	if len(lost) > 0 {
+		a.addNotice("Some options kept in this browser could not be opened and are left out: "+strings.Join(lost, "; ")+".", true)
+	}
+}
+
+// nextLetters are the letters no kept option has, in order.
+func nextLetters(kept []keptOption) string {
+	var b strings.Builder
+	for _, l := range []string{"A", "B", "C"} {
+		free := true
+		for _, k := range kept {
+			free = free && k.Letter != l
+		}
+		if free {
+			b.WriteString(l)
+		}
+	}
+	return b.String()
+}
+
+// addNotice adds a sentence to the notice across the page, a problem if
+// either is. Call with a.mu held.
+func (a *App) addNotice(msg string, isErr bool) {
+	if a.notice != "" {
+		msg = a.notice + " " + msg
+	}
+	a.notice, a.noticeErr = msg, isErr || a.noticeErr
 }

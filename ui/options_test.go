@@ -251,3 +251,54 @@ func TestAppCostInputs(t *testing.T) {
 	opts := optionsFor(s, "cost.currency")
 	assert.Equal(t, "ISK", opts[len(opts)-1].Value)
 }
+
+func TestAppOptionsKeptForTheNextVisit(t *testing.T) {
+	a, h := newHosted(t)
+	button(t, a, "options")
+	button(t, a, "keep")
+	typeInto(t, a, "node.vision.fps", "2")
+	button(t, a, "keep")
+	typeInto(t, a, "node.vision.fps", "8")
+	require.NotEmpty(t, h.options)
+	saved := h.options[len(h.options)-1]
+	assert.Contains(t, saved, `"format":"`+keptFormat+`"`)
+
+	// The next visit plans them again, letters and all.
+	h2 := &host{}
+	b, err := New(Options{Host: h2, Scenario: a.ScenarioJSON(), KeptOptions: []byte(saved)})
+	require.NoError(t, err)
+	b.resize(1280, 720, 1)
+	require.Len(t, b.kept, 2)
+	for i, k := range b.kept {
+		assert.Equal(t, a.kept[i].Letter, k.Letter)
+		assert.Equal(t, string(a.kept[i].Scen.JSON()), string(k.Scen.JSON()))
+		assert.Equal(t, a.kept[i].Res.Lifetime, k.Res.Lifetime)
+	}
+	assert.Empty(t, b.Debug().Notice)
+
+	// Removing the last one forgets them.
+	button(t, a, "option-remove-1")
+	button(t, a, "option-remove-0")
+	assert.Equal(t, "", h.options[len(h.options)-1])
+}
+
+func TestAppOptionsKeptButBroken(t *testing.T) {
+	good := scenario.Demo()
+	good.Node.Vision.FPS = 3
+	bad := strings.Replace(string(good.JSON()), `"form": "D"`, `"form": "9V"`, 1)
+	require.NotEqual(t, string(good.JSON()), bad, "the test needs a bad scenario")
+	kept := fmt.Sprintf(`{"format":%q,"options":[{"letter":"B","scenario":%s},{"letter":"A","scenario":%s},{"letter":"B","scenario":%s}]}`,
+		keptFormat, good.JSON(), bad, good.JSON())
+	a, err := New(Options{KeptOptions: []byte(kept)})
+	require.NoError(t, err)
+	require.Len(t, a.kept, 1)
+	assert.Equal(t, "B", a.kept[0].Letter)
+	n := a.Debug().Notice
+	assert.Contains(t, n, "option A (cells.form")
+	assert.Contains(t, n, `option 3 (letter "B"; allowed: A, B or C, once each)`)
+
+	b, err := New(Options{KeptOptions: []byte(`{"format": "something else"}`)})
+	require.NoError(t, err)
+	assert.Empty(t, b.kept)
+	assert.Contains(t, b.Debug().Notice, "could not be read")
+}

@@ -45,6 +45,19 @@ func (p *page) saved() []byte {
 	return []byte(v.String())
 }
 
+// savedOptions are the options the page kept from the last visit, or nil.
+func (p *page) savedOptions() []byte {
+	v := p.call("_savedOptions")
+	if v.Type() != js.TypeString || v.String() == "" {
+		return nil
+	}
+	return []byte(v.String())
+}
+
+// KeepOptions keeps the options kept for comparison for the next visit
+// (ui.Host); nil forgets them.
+func (p *page) KeepOptions(data []byte) { p.call("_keepOptions", string(data)) }
+
 // setAside moves the kept scenario out of the way, so a bad one is not
 // read again, and returns where it went.
 func (p *page) setAside() string {

@@ -536,6 +536,14 @@ func TestBrowser(t *testing.T) {
 		if d := debugState(t, ctx); d.Values["node.vision.fps"] != "2" || d.Notice != "" {
 			t.Errorf("after a reload: fps %q, notice %q", d.Values["node.vision.fps"], d.Notice)
 		}
+		// The option kept before is kept too; removing it forgets it.
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `(o => o && o.join() === "Option A,Current")(nodelife.debug().options)`, "the kept option after a reload")
+		click(t, ctx, debugState(t, ctx).Buttons["option-remove-0"])
+		waitFor(t, ctx, `(o => o && o.length === 1)(nodelife.debug().options) && !localStorage.getItem("nodelife.options")`,
+			"the option removed and forgotten")
+		click(t, ctx, debugState(t, ctx).Buttons["options"])
+		waitFor(t, ctx, `nodelife.debug().options === null`, "the chart again")
 	})
 
 	t.Run("a corrupt saved scenario is set aside and reported", func(t *testing.T) {

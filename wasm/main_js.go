@@ -15,7 +15,7 @@ import (
 
 func main() {
 	page := connect()
-	o := ui.Options{Theme: themeFor(prefersDark()), OnFirstFrame: page.ready, Host: page}
+	o := ui.Options{Theme: themeFor(prefersDark()), OnFirstFrame: page.ready, Host: page, KeptOptions: page.savedOptions()}
 	// The scenario kept from the last visit; one that no longer opens is set
 	// aside and reported, and the demo shows instead.
 	setAside := func(err error) {
