@@ -150,6 +150,58 @@ func BenchmarkLoadToFirstChart(b *testing.B) {
 	b.ReportMetric(first, "first-ready-ms")
 }
 
+// BenchmarkAdviceInTheBackground shows an outdoor 5-year scenario with a
+// panel (nodelife.load, as an edit) and times its advice, which the app
+// works out between frames: weather years, panel and cell sizes, levers.
+//
+//   - advice-ms: from the load to the advice done, by the test's clock;
+//   - load-ms: of which the load itself: the answer without the advice;
+//   - longest-gap-ms: the longest time between two of the browser's
+//     animation frames while the advice was worked out: how long the page
+//     was held at worst, by a requestAnimationFrame loop in the page.
+func BenchmarkAdviceInTheBackground(b *testing.B) {
+	ctx, url := benchBrowser(b)
+	open(b, ctx, url, 1280, 720, 1)
+	var adviceMs, loadMs, gapMs float64
+	n := 0
+	for b.Loop() {
+		b.StopTimer()
+		waitLong(b, ctx, adviceTimeout, `nodelife.debug().advice.state === "done"`, "the last advice")
+		scen := demoWith(b, map[string]any{"plan.years": benchYears, "site.placement": "outdoor",
+			"harvest.kind": "panel", "node.vision.fps": 5 + n%2})
+		if _, err := eval[bool](ctx, stepTimeout, `(() => {
+			if (window.gaps) window.gaps.on = false;
+			const g = window.gaps = {max: 0, last: performance.now(), on: true};
+			const f = (t) => { if (!g.on) return; g.max = Math.max(g.max, t - g.last); g.last = t; requestAnimationFrame(f); };
+			requestAnimationFrame(f);
+			return true; })()`); err != nil {
+			b.Fatal(err)
+		}
+		b.StartTimer()
+		start := time.Now()
+		if _, err := eval[any](ctx, stepTimeout, `nodelife.load(`+jsString(string(scen))+`).then(() => {
+			window.gaps.max = 0; window.gaps.last = performance.now(); })`); err != nil {
+			b.Fatal(err)
+		}
+		loaded := time.Since(start)
+		waitLong(b, ctx, adviceTimeout, `nodelife.debug().advice.state === "done"`, "the advice")
+		took := time.Since(start)
+		b.StopTimer()
+		g, err := eval[float64](ctx, stepTimeout, `(window.gaps.on = false, window.gaps.max)`)
+		if err != nil {
+			b.Fatal(err)
+		}
+		adviceMs += float64(took.Microseconds()) / 1000
+		loadMs += float64(loaded.Microseconds()) / 1000
+		gapMs += g
+		n++
+		b.StartTimer()
+	}
+	b.ReportMetric(adviceMs/float64(n), "advice-ms/op")
+	b.ReportMetric(gapMs/float64(n), "longest-gap-ms/op")
+	b.ReportMetric(loadMs/float64(n), "load-ms/op")
+}
+
 // redraw is nodelife.debug().redraw (ui.Redraw).
 type redraw struct {
 	Run       int64   `json:"run"`
