@@ -103,6 +103,7 @@ type App struct {
 	outbox      []func() // calls to the host, made after the lock is let go
 	wantPNG     bool     // the chart is to be exported as a PNG at the next Draw
 	pasted      []rune
+	typed       string        // "path\x00text" last checked as it was typed
 	tick        chan struct{} // closed at the next tick, for the advice's pacing
 }
 
@@ -317,6 +318,9 @@ func (a *App) step(in *Input) {
 	}
 	if edit != nil {
 		a.form.Settle(a.apply(*edit), a.scen)
+		changed = true
+	}
+	if a.checkTyping() {
 		changed = true
 	}
 	// Tab past the last input (or Shift+Tab before the first), once the

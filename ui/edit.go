@@ -23,6 +23,35 @@ type Edit struct {
 	Drag bool
 }
 
+// checkTyping checks the focused input's text with the engine's parser as
+// it is typed, and marks a value the engine would refuse in place, with the
+// reason, before Enter; the answer stays the last good one until a value is
+// applied. An empty field or a lone sign is not checked: the user is still
+// typing. It reports whether the input's mark changed. Call with a.mu held.
+func (a *App) checkTyping() bool {
+	r := a.form.Focused()
+	if r == nil || r.Text == nil {
+		a.typed = ""
+		return false
+	}
+	key := r.Path + "\x00" + r.Text.Text
+	if key == a.typed {
+		return false
+	}
+	a.typed = key
+	why := "" // back at the applied value: nothing to mark
+	if t := strings.TrimSpace(r.Text.Text); r.Text.Edited() && t != "" && t != "-" && t != "+" {
+		if _, err := applyEdit(a.scen, Edit{Path: r.Path, Text: r.Text.Text}); err != nil {
+			why = reason(err, r.Path)
+		}
+	}
+	if why == r.Text.Err {
+		return false
+	}
+	r.Text.Err = why
+	return true
+}
+
 // Paths of the form's inputs that are not one scenario field.
 const (
 	pathPlace    = "site.place"    // an example place: position, clock and climate

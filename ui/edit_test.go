@@ -4,6 +4,9 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
 	"nodelife/engine/cell"
 	"nodelife/engine/scenario"
 )
@@ -167,4 +170,36 @@ func TestHistory(t *testing.T) {
 	if u, _ := h.Depth(); u != 3 {
 		t.Errorf("limit 3: %d steps kept", u)
 	}
+}
+
+func TestAppChecksAsYouType(t *testing.T) {
+	a, _ := newHosted(t)
+	res := string(a.ResultJSON())
+	tabTo(t, a, "node.vision.fps")
+	a.step(chars("61"))
+	want := a.Debug().Errors["node.vision.fps"]
+	require.NotEmpty(t, want, "61 fps is marked before Enter")
+	s := a.scen
+	s.Node.Vision.FPS = 61
+	_, perr := scenario.Parse(s.JSON())
+	require.Error(t, perr)
+	assert.Contains(t, perr.Error(), want, "in the engine's words")
+	assert.Equal(t, res, string(a.ResultJSON()), "the answer stays until a value is applied")
+
+	a.step(keys(KeyBackspace))
+	assert.Empty(t, a.Debug().Errors["node.vision.fps"], "6 fps is fine")
+	a.step(keys(KeyBackspace))
+	assert.Empty(t, a.Debug().Errors["node.vision.fps"], "an empty field is not nagged about")
+	a.step(chars("1..2"))
+	assert.NotEmpty(t, a.Debug().Errors["node.vision.fps"], "not a number")
+	for range 4 {
+		a.step(keys(KeyBackspace))
+	}
+	a.step(chars("5"))
+	assert.Empty(t, a.Debug().Errors["node.vision.fps"], "back at the applied value")
+	a.step(keys(KeyBackspace))
+	a.step(chars("7"))
+	a.step(keys(KeyEnter))
+	assert.Equal(t, 7.0, a.scen.Node.Vision.FPS)
+	assert.Empty(t, a.Debug().Errors)
 }

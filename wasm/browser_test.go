@@ -200,6 +200,7 @@ func TestBrowser(t *testing.T) {
 			t.Fatal(err)
 		}
 		waitFor(t, ctx, `nodelife.debug().text === "61"`, "the typed 61 (the field was selected after Enter)")
+		waitFor(t, ctx, `!!nodelife.debug().errors["node.vision.fps"]`, "61 fps marked as it is typed, before Enter")
 		key(t, ctx, "Enter", "Enter", 13)
 		waitFor(t, ctx, `!!nodelife.debug().errors["node.vision.fps"]`, "the refusal of 61 fps")
 		if same, _ := eval[bool](ctx, stepTimeout, `JSON.stringify(nodelife.result()) === `+jsString(res)); !same {
