@@ -2,6 +2,7 @@ package sim
 
 import (
 	"math"
+	"sync"
 	"time"
 
 	"nodelife/engine/cell"
@@ -150,6 +151,9 @@ type state struct {
 	lastSwapDay           int // day index of the last swap, −1 before any
 }
 
+// snapshots holds day-start snapshot buffers for reuse across runs.
+var snapshots = sync.Pool{New: func() any { return new([]state) }}
+
 // RunOpts simulates the scenario with a prepared environment table and
 // options.
 func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
@@ -181,22 +185,31 @@ func RunOpts(s scenario.Scenario, y *Year, o Options) Result {
 		closedC = *s.Site.IndoorClosedTempC
 	}
 
-	// The horizon's local days.
-	var dayStarts []time.Time
+	// The horizon's local days (sized up front: a run is repeated many times
+	// by the advice, and growing the slices is most of its garbage).
+	dayStarts := make([]time.Time, 0, int(end.Sub(start).Hours()/24)+2)
 	for d := start; d.Before(end); d = d.AddDate(0, 0, 1) {
 		dayStarts = append(dayStarts, d)
 	}
 	dayStarts = append(dayStarts, end)
 	nDays := len(dayStarts) - 1
 
-	r := Result{Start: start, End: end, Step: step, Pack: pack}
+	r := Result{Start: start, End: end, Step: step, Pack: pack, Days: make([]Day, 0, nDays)}
 	st := state{planned: newCellSet(ratedWh), first: newCellSet(ratedWh),
 		minSoC: 100, tMin: math.Inf(1), tMax: math.Inf(-1), lastSwapDay: -1}
 	st.ledger.InstalledWh = ratedWh
 	st.t = start
 	st.utcDay = start.UTC().Truncate(24 * time.Hour)
 	st.utcMin = int(start.UTC().Sub(st.utcDay) / time.Minute)
-	snaps := make([]state, nDays)
+	// A snapshot of the state at each day's start, to go back to a visit
+	// day. The advice runs the same horizon a hundred times and more, so
+	// the buffer is reused; every day's entry is written before it is read.
+	buf := snapshots.Get().(*[]state)
+	defer snapshots.Put(buf)
+	if cap(*buf) < nDays {
+		*buf = make([]state, nDays)
+	}
+	snaps := (*buf)[:nDays]
 
 	// The load's conditions and its power, recomputed when they change.
 	var lastCond load.Conditions
