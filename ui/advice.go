@@ -35,6 +35,21 @@ func (a *App) wantAdvice() {
 	a.advice.after = a.stats.Frames
 }
 
+// layoutProgress lays the page out again for the advice's progress. When
+// nothing else waits to be drawn and the progress moved nothing, only the
+// footer and the advice block are repainted: under software GL a whole
+// frame costs as much as a simulation run. Call with a.mu held.
+func (a *App) layoutProgress() {
+	full := a.dirty || a.menu != nil || a.form.OpenList() != nil || a.page.options != nil
+	footer, advice := a.page.Footer, a.page.Advice
+	a.layout()
+	if full || a.page.Footer != footer || a.page.Advice != advice || a.page.options != nil {
+		return
+	}
+	a.dirty = false
+	a.repaint = append(a.repaint, a.page.Footer, a.page.Advice.Intersect(a.page.Side))
+}
+
 // maybeStartAdvice starts the advice in the background once the answer has
 // been drawn and no slider is being dragged. Call with a.mu held.
 func (a *App) maybeStartAdvice() {
@@ -61,7 +76,7 @@ func (a *App) maybeStartAdvice() {
 				// every run: a frame costs the page as much as a run.
 				if now := time.Now(); now.Sub(shown) >= progressEvery {
 					shown = now
-					a.layout()
+					a.layoutProgress()
 				}
 			}
 			a.mu.Unlock()

@@ -102,6 +102,7 @@ type App struct {
 	host        Host
 	outbox      []func() // calls to the host, made after the lock is let go
 	wantPNG     bool     // the chart is to be exported as a PNG at the next Draw
+	repaint     []Rect   // regions to paint again when the rest of the screen stands
 	pasted      []rune
 	typed       string        // "path\x00text" last checked as it was typed
 	tick        chan struct{} // closed at the next tick, for the advice's pacing
@@ -706,9 +707,22 @@ func (a *App) Draw(screen *ebiten.Image) {
 				a.failure = fmt.Errorf("ui: drawing: %v\n%s", r, debug.Stack())
 			}
 		}()
+		if !a.dirty && len(a.repaint) > 0 && a.white != nil {
+			// Only these regions changed: paint the page again inside them.
+			p := NewPainter(screen, a.scale, a.fonts, a.white)
+			for _, r := range a.repaint {
+				if !r.Empty() {
+					drawPage(p.Clip(r), &a.page, a.theme)
+				}
+			}
+			a.repaint = nil
+			a.stats.Frames++
+			return
+		}
 		if !a.dirty {
 			return
 		}
+		a.repaint = nil
 		if a.white == nil {
 			a.white = newWhitePixel()
 		}

@@ -7,6 +7,9 @@ import (
 	"testing"
 	"time"
 
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
 	"nodelife/engine/scenario"
 )
 
@@ -379,4 +382,30 @@ func TestAppOpenMenu(t *testing.T) {
 	if s, _ := scenario.Parse(a.ScenarioJSON()); s.Plan.Years != 6 {
 		t.Errorf("undo after opening the demo: %d-year plan, want the edited 6", s.Plan.Years)
 	}
+}
+
+func TestAppProgressRepaintsOnlyItsRegions(t *testing.T) {
+	a, _ := newHosted(t)
+	a.mu.Lock()
+	defer a.mu.Unlock()
+	a.advice.status = AdviceStatus{State: AdviceRunning, Done: 1, Total: 40}
+	a.layout() // the advice has started: drawn in full once
+	a.dirty = false
+	a.advice.status.Done = 3
+	a.layoutProgress()
+	assert.False(t, a.dirty, "a progress step alone does not repaint the page")
+	require.Len(t, a.repaint, 2)
+	assert.Equal(t, a.page.Footer, a.repaint[0])
+	assert.True(t, a.repaint[1].Within(a.page.Advice) && !a.repaint[1].Empty(), "the advice block, as far as it shows")
+	assert.Contains(t, joined(&a.page.footer), "8 %", "the footer says how far (3 of 40)")
+
+	// Anything else waiting to be drawn, or an open menu, repaints it all.
+	a.repaint, a.dirty = nil, true
+	a.advice.status.Done = 10
+	a.layoutProgress()
+	assert.True(t, a.dirty)
+	a.dirty = false
+	a.menu = &Choice{}
+	a.layoutProgress()
+	assert.True(t, a.dirty, "a menu over the page")
 }

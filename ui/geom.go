@@ -41,6 +41,16 @@ func (r Rect) Within(o Rect) bool {
 // Empty reports whether r has no area.
 func (r Rect) Empty() bool { return r.W <= 0 || r.H <= 0 }
 
+// Intersect is the part of r inside o; empty when they do not overlap.
+func (r Rect) Intersect(o Rect) Rect {
+	x0, y0 := max(r.X, o.X), max(r.Y, o.Y)
+	x1, y1 := min(r.Right(), o.Right()), min(r.Bottom(), o.Bottom())
+	if x1 <= x0 || y1 <= y0 {
+		return Rect{}
+	}
+	return Rect{x0, y0, x1 - x0, y1 - y0}
+}
+
 // CutTop splits r into a top part of height h and the rest.
 func (r Rect) CutTop(h float64) (top, rest Rect) {
 	h = math.Min(math.Max(h, 0), r.H)
