@@ -90,6 +90,29 @@
     }
   }
 
+  // loadKept is what the browser keeps under key, or "".
+  function loadKept(key) {
+    const s = storage();
+    try {
+      return (s && s.getItem(key)) || "";
+    } catch (e) {
+      return "";
+    }
+  }
+
+  // keep keeps value under key for the next visit, or forgets the key when
+  // value is empty; what is kept is named in a warning when the browser
+  // refuses.
+  function keep(key, value, what) {
+    const s = storage();
+    try {
+      if (s && value) s.setItem(key, value);
+      else if (s) s.removeItem(key);
+    } catch (e) {
+      console.warn("nodelife: " + what + " could not be kept in this browser:", e);
+    }
+  }
+
   function download(name, type, body) {
     const url = URL.createObjectURL(new Blob([body], { type }));
     const a = document.createElement("a");
@@ -211,37 +234,9 @@
       },
     },
     _fail: { value: fail },
-    _saved: {
-      value: () => {
-        const s = storage();
-        try {
-          return (s && s.getItem(SAVED)) || "";
-        } catch (e) {
-          return "";
-        }
-      },
-    },
-    _savedOptions: {
-      value: () => {
-        const s = storage();
-        try {
-          return (s && s.getItem(OPTIONS)) || "";
-        } catch (e) {
-          return "";
-        }
-      },
-    },
-    _keepOptions: {
-      value: (json) => {
-        const s = storage();
-        try {
-          if (s && json) s.setItem(OPTIONS, json);
-          else if (s) s.removeItem(OPTIONS);
-        } catch (e) {
-          console.warn("nodelife: the options could not be kept in this browser:", e);
-        }
-      },
-    },
+    _saved: { value: () => loadKept(SAVED) },
+    _savedOptions: { value: () => loadKept(OPTIONS) },
+    _keepOptions: { value: (json) => keep(OPTIONS, json, "the options") },
     _setAside: {
       value: () => {
         const s = storage();
@@ -256,12 +251,7 @@
     },
     _changed: {
       value: (scenario, text) => {
-        const s = storage();
-        try {
-          if (s) s.setItem(SAVED, scenario);
-        } catch (e) {
-          console.warn("nodelife: the scenario could not be kept in this browser:", e);
-        }
+        keep(SAVED, scenario, "the scenario");
         if (summary) summary.textContent = text;
         events.dispatchEvent(new CustomEvent("change", { detail: { summary: text } }));
       },
