@@ -348,11 +348,8 @@ func (a *adviser) sizePanel(factors []float64, draw int) (*Sizing, error) {
 		z.Reason = "primary cells cannot store the harvest: nights still drain them; choose a rechargeable chemistry to remove the visits"
 		return z, nil
 	}
-	ladder := panelLadder()
+	ladder := panelLadder() // up to 10 000 cm² for either harvester
 	maxArea := ladder[len(ladder)-1]
-	if field == "harvest.indoor.area_cm2" {
-		maxArea = 10000
-	}
 	z.MaxAreaTriedCm2 = maxArea
 	with := func(area float64) scenario.Scenario {
 		v := s
@@ -371,20 +368,9 @@ func (a *adviser) sizePanel(factors []float64, draw int) (*Sizing, error) {
 		z.Reason = whyNoSize(s, top)
 		return z, nil
 	}
-	// Bisection on the ladder: lo fails (or is below it), hi works.
-	lo, hi := -1, len(ladder)-1
-	var best sim.Result = top
-	for hi-lo > 1 {
-		mid := (lo + hi) / 2
-		r, err := a.simulate(with(ladder[mid]), factors)
-		if err != nil {
-			return nil, err
-		}
-		if ok(r) {
-			hi, best = mid, r
-		} else {
-			lo = mid
-		}
+	hi, lo, best, err := a.smallestThatWorks(len(ladder), top, func(i int) scenario.Scenario { return with(ladder[i]) }, factors)
+	if err != nil {
+		return nil, err
 	}
 	area := ladder[hi]
 	margin := round3(best.MinSoCPct)
@@ -395,6 +381,28 @@ func (a *adviser) sizePanel(factors []float64, draw int) (*Sizing, error) {
 	}
 	z.CurrentIsEnough = current >= area
 	return z, nil
+}
+
+// smallestThatWorks bisects n candidates, ordered from the smallest, for the
+// smallest that works (ok), given that the largest does, with result top.
+// It returns that candidate's index and result, and the index of the largest
+// candidate below it that fails (-1 when the smallest works): ⌈log2 n⌉ runs,
+// the answer being monotonic in the candidate's size.
+func (a *adviser) smallestThatWorks(n int, top sim.Result, scen func(i int) scenario.Scenario, factors []float64) (works, fails int, best sim.Result, err error) {
+	fails, works, best = -1, n-1, top
+	for works-fails > 1 {
+		mid := (fails + works) / 2
+		r, err := a.simulate(scen(mid), factors)
+		if err != nil {
+			return 0, 0, sim.Result{}, err
+		}
+		if ok(r) {
+			works, best = mid, r
+		} else {
+			fails = mid
+		}
+	}
+	return works, fails, best, nil
 }
 
 // whyNoSize explains why even the largest harvester leaves the node short.
@@ -455,18 +463,9 @@ func (a *adviser) sizeCells(factors []float64) (*CellSizing, error) {
 	if !ok(last) {
 		return &CellSizing{Reason: fmt.Sprintf("no %s pack up to %d cells in parallel carries the node through the plan without a visit", chem.Name, 8)}, nil
 	}
-	lo, hi := -1, len(cands)-1
-	for hi-lo > 1 {
-		mid := (lo + hi) / 2
-		r, err := a.simulate(with(cands[mid]), factors)
-		if err != nil {
-			return nil, err
-		}
-		if ok(r) {
-			hi = mid
-		} else {
-			lo = mid
-		}
+	hi, _, _, err := a.smallestThatWorks(len(cands), last, func(i int) scenario.Scenario { return with(cands[i]) }, factors)
+	if err != nil {
+		return nil, err
 	}
 	c := cands[hi]
 	return &CellSizing{Works: true, Form: c.form.Name, Parallel: c.parallel, CapacityMAh: c.mAh}, nil
