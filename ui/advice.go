@@ -43,7 +43,7 @@ func (a *App) layoutProgress() {
 	full := a.dirty || a.menu != nil || a.form.OpenList() != nil || a.page.options != nil
 	footer, advice := a.page.Footer, a.page.Advice
 	a.layout()
-	if full || a.page.Footer != footer || a.page.Advice != advice || a.page.options != nil {
+	if full || a.page.Footer != footer || a.page.Advice != advice {
 		return
 	}
 	a.dirty = false

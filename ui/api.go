@@ -9,6 +9,7 @@ import (
 
 	"nodelife/engine/plan"
 	"nodelife/engine/scenario"
+	"nodelife/engine/weather"
 )
 
 // RunOptions choose what Run works out. The zero value is the whole plan.
@@ -60,7 +61,7 @@ func (a *App) Load(data []byte) ([]byte, error) {
 func (a *App) Open(data []byte, name string) error {
 	a.mu.Lock()
 	defer a.flush()
-	if isWeatherName(name) {
+	if weather.FormatOf(name) != "" { // a weather file
 		if err := a.openWeather(data, name); err != nil {
 			a.setNotice(fmt.Sprintf("%s could not be used. %s", name, err), true)
 			return err
@@ -89,14 +90,21 @@ func (a *App) open(data []byte) error {
 	if err != nil {
 		return err
 	}
-	a.history.Record(a.scen)
-	a.form.Cancel()
-	a.form.Rebuild(s)
 	if a.notice != "" && a.noticeErr {
 		a.notice = ""
 	}
-	a.setScenario(s, r)
+	a.replace(s, r)
 	return nil
+}
+
+// replace makes s, planned as r, the scenario on screen as one step of the
+// history: the inputs are made anew for it and anything typed is dropped.
+// Call with a.mu held.
+func (a *App) replace(s scenario.Scenario, r plan.Result) {
+	a.history.Record(a.scen)
+	a.form.Cancel()
+	a.form.Rebuild(s)
+	a.setScenario(s, r)
 }
 
 // flush lets go of the lock and makes the calls to the host queued under it.

@@ -437,13 +437,9 @@ func (a *App) editKept(i int) {
 	k := a.kept[i]
 	a.kept[i] = keptOption{Letter: k.Letter, Scen: a.scen, Res: a.res}
 	a.keepOptions()
-	a.history.Record(a.scen)
 	a.redraw.commit(time.Now())
 	a.notice, a.noticeErr = fmt.Sprintf("Editing what was %s; the scenario you were editing is now %s.", k.Name(), k.Name()), false
-	a.form.Sync(k.Scen)
-	a.form.Cancel()
-	a.setScenario(k.Scen, k.Res)
-	a.layoutForm()
+	a.replace(k.Scen, k.Res)
 }
 
 // exportOptions offers the comparison as a JSON file, the same format as
@@ -470,11 +466,14 @@ const keptFormat = "nodelife.options/1"
 // keptFile is the kept options as the page keeps them between visits: each
 // option's letter and scenario file (its result is planned again).
 type keptFile struct {
-	Format  string `json:"format"`
-	Options []struct {
-		Letter   string          `json:"letter"`
-		Scenario json.RawMessage `json:"scenario"`
-	} `json:"options"`
+	Format  string      `json:"format"`
+	Options []keptEntry `json:"options"`
+}
+
+// keptEntry is one kept option in a keptFile.
+type keptEntry struct {
+	Letter   string          `json:"letter"`
+	Scenario json.RawMessage `json:"scenario"`
 }
 
 // keepOptions hands the kept options to the page for the next visit. Call
@@ -487,10 +486,7 @@ func (a *App) keepOptions() {
 	if len(a.kept) > 0 {
 		f := keptFile{Format: keptFormat}
 		for _, k := range a.kept {
-			f.Options = append(f.Options, struct {
-				Letter   string          `json:"letter"`
-				Scenario json.RawMessage `json:"scenario"`
-			}{k.Letter, k.Scen.JSON()})
+			f.Options = append(f.Options, keptEntry{k.Letter, k.Scen.JSON()})
 		}
 		var err error
 		if data, err = json.Marshal(f); err != nil {

@@ -26,12 +26,6 @@ func weatherKey(path string) string {
 	return strings.ToLower(path[strings.LastIndexAny(path, `/\`)+1:])
 }
 
-// isWeatherName reports whether a file's name marks it as a weather file.
-func isWeatherName(name string) bool {
-	k := weatherKey(name)
-	return strings.HasSuffix(k, ".epw") || strings.HasSuffix(k, ".csv")
-}
-
 // waiting is a scenario file that names a weather file the page does not
 // have yet.
 type waiting struct {
@@ -101,10 +95,7 @@ func (a *App) openWeather(data []byte, name string) error {
 		return err
 	}
 	a.redraw.commit(time.Now())
-	a.history.Record(a.scen)
-	a.form.Cancel()
-	a.form.Rebuild(s)
-	a.setScenario(s, r)
+	a.replace(s, r)
 	a.setNotice(fmt.Sprintf("The site now uses the weather in %s. Ctrl+Z goes back to the climate normals.", what), false)
 	return nil
 }

@@ -327,15 +327,28 @@ func abs(x int) int {
 // (.epw) file.
 var ErrNotWeather = errors.New("not a weather file")
 
-// Read reads a weather file by its name's extension, case-insensitively:
-// ".epw" with ReadEPW, ".csv" with ReadTMY3. Any other name gives an error
-// wrapping ErrNotWeather that says what is allowed.
-func Read(file string, in io.Reader) (*Series, error) {
-	ext := strings.ToLower(file[strings.LastIndexAny(file, `/\`)+1:])
+// FormatOf is the format a weather file's name gives it, by the extension
+// of its last path element in any case: "epw" for ".epw", "tmy3" for
+// ".csv", "" for any other name.
+func FormatOf(file string) string {
+	base := strings.ToLower(file[strings.LastIndexAny(file, `/\`)+1:])
 	switch {
-	case strings.HasSuffix(ext, ".epw"):
+	case strings.HasSuffix(base, ".epw"):
+		return "epw"
+	case strings.HasSuffix(base, ".csv"):
+		return "tmy3"
+	}
+	return ""
+}
+
+// Read reads a weather file by its name (FormatOf): ".epw" with ReadEPW,
+// ".csv" with ReadTMY3. Any other name gives an error wrapping
+// ErrNotWeather that says what is allowed.
+func Read(file string, in io.Reader) (*Series, error) {
+	switch FormatOf(file) {
+	case "epw":
 		return ReadEPW(file, in)
-	case strings.HasSuffix(ext, ".csv"):
+	case "tmy3":
 		return ReadTMY3(file, in)
 	}
 	return nil, fmt.Errorf("%q is %w (allowed: a TMY3 file ending .csv or an EPW file ending .epw)", file, ErrNotWeather)

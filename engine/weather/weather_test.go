@@ -172,3 +172,12 @@ func TestReadByName(t *testing.T) {
 		}
 	}
 }
+
+func TestFormatOf(t *testing.T) {
+	for name, want := range map[string]string{
+		"oslo.epw": "epw", "C:\\weather\\OSLO.EPW": "epw", "data/tmy3/725300TYA.CSV": "tmy3",
+		"oslo.txt": "", "epw": "", "weather.epw/notes": "", "": "",
+	} {
+		assert.Equal(t, want, FormatOf(name), name)
+	}
+}
