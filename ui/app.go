@@ -79,6 +79,7 @@ type App struct {
 	advice     adviceJob
 	menu       *Choice                    // the open header menu, or nil
 	btnFocus   int                        // the page button with the keyboard (index into page.Buttons), or -1
+	shortDays  []report.DaySpan           // the result's days under 12 h, for the chart
 	kept       []keptOption               // scenarios kept to compare with this one
 	weather    map[string]*weather.Series // weather files given this visit, by weatherKey
 	waiting    *waiting                   // a scenario file waiting for its weather file
@@ -166,6 +167,7 @@ func New(o Options) (*App, error) {
 func (a *App) setScenario(s scenario.Scenario, r plan.Result) {
 	a.stats.Runs++
 	a.scen, a.res = s, r
+	a.shortDays = shortDays(s, r.Daily)
 	a.remarshal()
 	a.answer = AnswerFor(s, r)
 	if !a.drag.active {
@@ -203,7 +205,7 @@ func (a *App) layout() {
 	undo, redo := a.history.Depth()
 	c := PageContent{Name: a.scen.Name, Result: a.res, ReservePct: a.scen.Plan.ReservePct, Answer: a.answer,
 		Advice: a.advice.status, Notice: a.notice, NoticeError: a.noticeErr,
-		CanUndo: undo > 0, CanRedo: redo > 0, SideScroll: a.sideScroll, Site: report.ShadingFor(a.scen)}
+		CanUndo: undo > 0, CanRedo: redo > 0, SideScroll: a.sideScroll, ShortDays: a.shortDays}
 	if a.showOpts {
 		oc := a.optionsContent()
 		c.Options = &oc

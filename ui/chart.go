@@ -6,6 +6,7 @@ import (
 
 	"nodelife/engine/plan"
 	"nodelife/engine/report"
+	"nodelife/engine/scenario"
 )
 
 // The chart's scales and ticks are the engine's (engine/report), so the
@@ -209,4 +210,15 @@ func PlaceLabels(wants []LabelWant, shapes [][]float64, lo, hi, pad, gap float64
 		}
 	}
 	return spots
+}
+
+// shortDays are the days of a scenario's result to shade as under 12 h,
+// by the charts' rule (report.ShadingFor), or nil. The app works them out
+// once per result: they do not change with the layout.
+func shortDays(s scenario.Scenario, days []plan.Day) []report.DaySpan {
+	sh := report.ShadingFor(s)
+	if !sh.ShortDays {
+		return nil
+	}
+	return report.ShortDaySpans(days, sh.LatDeg, sh.LonDeg)
 }

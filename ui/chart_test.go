@@ -174,7 +174,7 @@ func TestPlaceLabels(t *testing.T) {
 func TestChartOfTheDemo(t *testing.T) {
 	s := scenario.Demo()
 	r := mustPlan(t, s)
-	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, nil, fonts(t), Light(), 1)
 	if len(v.Swaps) != len(r.Swaps) || len(v.Swaps) == 0 {
 		t.Fatalf("%d swap markers for %d swaps", len(v.Swaps), len(r.Swaps))
 	}
@@ -207,7 +207,7 @@ func TestChartSwapOnTheFlatDate(t *testing.T) {
 	if len(r.Swaps) == 0 || r.FirstBrownout == nil || r.Swaps[0].Date != *r.FirstBrownout {
 		t.Fatalf("swaps %v, flat %v: the test needs a swap on the flat date", r.Swaps, r.FirstBrownout)
 	}
-	v := layoutChart(Rect{300, 60, 620, 600}, r, 0, report.Shading{}, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, 0, nil, fonts(t), Light(), 1)
 	var labels []string
 	for _, tx := range v.Labels.texts {
 		if tx.role == roleSwap || tx.role == roleFlat || strings.HasPrefix(tx.s, "reserve") {
@@ -241,7 +241,7 @@ func farNorth() scenario.Scenario {
 func TestChartBarsCutAFarLargerHarvest(t *testing.T) {
 	s := farNorth()
 	r := mustPlan(t, s)
-	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, nil, fonts(t), Light(), 1)
 	maxH, maxL := 0.0, 0.0
 	for _, m := range v.Months {
 		maxH, maxL = math.Max(maxH, m.HarvestWhPerDay), math.Max(maxL, m.LoadWhPerDay)
@@ -267,7 +267,7 @@ func TestChartNamesWhatEndsTheCells(t *testing.T) {
 	if r.EndOfLifeLimit == nil || *r.EndOfLifeLimit != "temperature" {
 		t.Fatalf("end of life %v: the test needs cells stopped by the cold", r.EndOfLifeLimit)
 	}
-	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, s.Plan.ReservePct, nil, fonts(t), Light(), 1)
 	if v.Flat == nil || !strings.HasPrefix(v.Flat.Label, "outside rated temperature") {
 		t.Errorf("marker %+v; want it to say the cells are outside their rated temperature", v.Flat)
 	}
@@ -298,7 +298,7 @@ func outdoorAt(lat, lon float64, zone, preset string) scenario.Scenario {
 func TestChartShadesShortDays(t *testing.T) {
 	oslo := outdoorAt(59.91, 10.75, "Europe/Oslo", "cold-continental")
 	r := mustPlan(t, oslo)
-	v := layoutChart(Rect{300, 60, 620, 600}, r, oslo.Plan.ReservePct, report.ShadingFor(oslo), fonts(t), Light(), 1)
+	v := layoutChart(Rect{300, 60, 620, 600}, r, oslo.Plan.ReservePct, shortDays(oslo, r.Daily), fonts(t), Light(), 1)
 	// From 2027-03-01 for two years: the end of one winter, a whole one and
 	// the start of a third.
 	if len(v.ShortDays) != 3 {
@@ -351,15 +351,19 @@ func TestChartShadesShortDays(t *testing.T) {
 	indoor := scenario.Demo() // indoors in Oslo, no harvester
 	indoor.Plan.Years = 2
 	for name, c := range map[string]struct {
-		s    scenario.Scenario
-		site report.Shading
+		s     scenario.Scenario
+		shade bool // the scenario's own days, or none passed
 	}{
-		"10° N outdoors": {tropics, report.ShadingFor(tropics)},
-		"indoor demo":    {indoor, report.ShadingFor(indoor)},
-		"no site":        {oslo, report.Shading{}},
+		"10° N outdoors": {tropics, true},
+		"indoor demo":    {indoor, true},
+		"no site":        {oslo, false},
 	} {
 		r := mustPlan(t, c.s)
-		v := layoutChart(Rect{300, 60, 620, 600}, r, c.s.Plan.ReservePct, c.site, fonts(t), Light(), 1)
+		var short []report.DaySpan
+		if c.shade {
+			short = shortDays(c.s, r.Daily)
+		}
+		v := layoutChart(Rect{300, 60, 620, 600}, r, c.s.Plan.ReservePct, short, fonts(t), Light(), 1)
 		if len(v.ShortDays) != 0 || strings.Contains(joined(&v.Labels), "days under 12 h") {
 			t.Errorf("%s: shaded spans %v, labels %q; want none", name, v.ShortDays, joined(&v.Labels))
 		}
@@ -391,7 +395,7 @@ func TestChartNamesTheStart(t *testing.T) {
 	s := scenario.Demo()
 	r := mustPlan(t, s)
 	for _, w := range []float64{360, 480, 620, 900, 1400} {
-		v := layoutChart(Rect{0, 0, w, 600}, r, s.Plan.ReservePct, report.Shading{}, fonts(t), Light(), 1)
+		v := layoutChart(Rect{0, 0, w, 600}, r, s.Plan.ReservePct, nil, fonts(t), Light(), 1)
 		if len(v.XTicks) == 0 || !v.XTicks[0].At.Equal(date(r.Start)) || v.XTicks[0].Label != "Mar 2027" {
 			t.Fatalf("%g px: ticks %v; want the first on the start, %s, labelled Mar 2027", w, v.XTicks, r.Start)
 		}

@@ -7,8 +7,6 @@ import (
 	"math"
 
 	"github.com/hajimehoshi/ebiten/v2"
-
-	"nodelife/engine/report"
 )
 
 // The chart as a PNG: the export lays the chart out again at the origin, the
@@ -53,7 +51,7 @@ func (a *App) paintChartPNG() *pendingPNG {
 		return nil
 	}
 	at := Rect{0, 0, r.W, r.H}
-	v := layoutChart(at, a.res, a.scen.Plan.ReservePct, report.ShadingFor(a.scen), a.fonts, a.theme, 1/a.scale)
+	v := layoutChart(at, a.res, a.scen.Plan.ReservePct, a.shortDays, a.fonts, a.theme, 1/a.scale)
 	img := ebiten.NewImage(w, h)
 	p := NewPainter(img, a.scale, a.fonts, a.white)
 	p.Fill(at, a.theme.Palette.Background)

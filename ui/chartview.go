@@ -78,11 +78,11 @@ func (v *chartView) HoverArea() Rect {
 }
 
 // layoutChart lays out the chart of res, with its reserve line, in r.
-// site shades the days under 12 h behind the plot when it asks for them
-// (report.ShadingFor(scenario) gives a scenario's; the SVG chart shades the
-// same days). colW is the width of one band column (one device pixel is
+// short are the days under 12 h to shade behind the plot (shortDays gives a
+// scenario's once per result; the SVG chart shades the same days), nil for
+// none. colW is the width of one band column (one device pixel is
 // sharpest).
-func layoutChart(r Rect, res plan.Result, reservePct float64, site report.Shading, m Measurer, th Theme, colW float64) chartView {
+func layoutChart(r Rect, res plan.Result, reservePct float64, short []report.DaySpan, m Measurer, th Theme, colW float64) chartView {
 	v := chartView{Panel: r, days: res.Daily}
 	small := th.labelStyle()
 	title := th.headStyle()
@@ -96,10 +96,6 @@ func layoutChart(r Rect, res plan.Result, reservePct float64, site report.Shadin
 	end, _ := time.Parse(time.DateOnly, res.End)
 	// The days under 12 h, placed on a provisional axis first: whether any
 	// are on the chart decides the legend, which decides the plot's width.
-	var short []report.DaySpan
-	if site.ShortDays {
-		short = report.ShortDaySpans(res.Daily, site.LatDeg, site.LonDeg)
-	}
 	v.ShortDays = report.SpansX(res.Daily, short, TimeScale{Start: start, End: end, X0: 0, X1: 1})
 	socLegend := []legendName{{"band", "daily min–max"}, {"mean", "daily mean"}}
 	if len(v.ShortDays) > 0 {

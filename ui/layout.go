@@ -64,8 +64,8 @@ type PageContent struct {
 	NoticeError bool   // … that reports a problem
 	CanUndo     bool
 	CanRedo     bool
-	SideScroll  float64        // how far the scrolling column is scrolled up
-	Site        report.Shading // the season shading behind the chart
+	SideScroll  float64          // how far the scrolling column is scrolled up
+	ShortDays   []report.DaySpan // the days under 12 h to shade behind the chart
 	// Options, when not nil, is shown in the options view instead of the
 	// chart and the answer.
 	Options *OptionsContent
@@ -187,7 +187,7 @@ func LayoutPage(w, h float64, c PageContent, m Measurer, th Theme, colW float64)
 		pg.Chart = blocks.Slot
 		pg.setSide(blocks)
 	}
-	pg.chart = layoutChart(pg.Chart, c.Result, c.ReservePct, c.Site, m, th, colW)
+	pg.chart = layoutChart(pg.Chart, c.Result, c.ReservePct, c.ShortDays, m, th, colW)
 	return pg
 }
 
