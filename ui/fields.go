@@ -317,25 +317,15 @@ var chemistryLines = map[string]string{
 	"nimh-lsd": "low self-discharge NiMH",
 }
 
-// helpText is the help under an input: one line, and when there is more to
-// say, after a line break, the full text the row shows, wrapped, while it has
-// the keyboard; splitHelp takes them apart. The full text is the engine's own
-// description, or where ours says more in the app (a profile's or a preset's
-// note, where an unset capacity comes from), ours.
-func helpText(s scenario.Scenario, path string) string {
-	line, full := helpParts(s, path)
-	if line == "" || line == full {
-		return full
-	}
-	return line + "\n" + full
-}
-
-// splitHelp takes a helpText apart: the line under an unfocused row, and the
-// full text under the focused one (the same when there is only one).
-func splitHelp(help string) (line, full string) {
-	line, full, ok := strings.Cut(help, "\n")
-	if !ok {
-		full = line
+// helpText is the help under an input: the one line under it, and the full
+// text the row shows, wrapped, while it has the keyboard (the same when the
+// full text fits the line). The full text is the engine's own description,
+// or where ours says more in the app (a profile's or a preset's note, where
+// an unset capacity comes from), ours.
+func helpText(s scenario.Scenario, path string) (line, full string) {
+	line, full = helpParts(s, path)
+	if line == "" {
+		line = full
 	}
 	return line, full
 }

@@ -113,7 +113,7 @@ func TestHelpFitsOneLineUnfocused(t *testing.T) {
 			f.Layout(v, helpScreen(v), m, Light())
 			for _, r := range f.Rows {
 				require.Len(t, r.help, 1, "%s, %g px: %s", c.name, v.W, r.Path)
-				line, _ := splitHelp(r.Help)
+				line := r.HelpLine
 				if r.help[0] != line || strings.HasSuffix(line, "…") || m.Advance(line, small) > r.Row.W {
 					cut[r.Path+": "+line] = c.name
 				}
@@ -132,7 +132,7 @@ func TestHelpFocusedShowsTheFullText(t *testing.T) {
 			for i, r := range f.Rows {
 				f.focusOn(i)
 				f.Layout(v, helpScreen(v), m, Light())
-				_, full := splitHelp(r.Help)
+				full := r.Help
 				require.NotEmpty(t, r.help, "%s: %s", c.name, r.Path)
 				require.Equal(t, strings.Fields(full), strings.Fields(strings.Join(r.help, " ")),
 					"%s, %g px: %s focused shows %q", c.name, v.W, r.Path, r.help)

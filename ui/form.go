@@ -12,12 +12,13 @@ import (
 // choice, a slider under some typed values) and a help line under it that
 // shows the engine's reason instead when a value is refused.
 type Row struct {
-	Path   string
-	Label  string // short name left of the control
-	Help   string // a short line, then after "\n" the full text (see helpText)
-	Text   *TextField
-	Choice *Choice
-	Slider *Slider // under a typed number, or nil
+	Path     string
+	Label    string // short name left of the control
+	Help     string // what the input means, in full (see helpText)
+	HelpLine string // … in the one line shown under it
+	Text     *TextField
+	Choice   *Choice
+	Slider   *Slider // under a typed number, or nil
 
 	Hover bool
 	Row   Rect // label, control, slider and help: the click target
@@ -185,7 +186,8 @@ func (f *Form) Rebuild(s scenario.Scenario) {
 }
 
 func newRow(s scenario.Scenario, sp fieldSpec) *Row {
-	r := &Row{Path: sp.path, Label: sp.label, Help: helpText(s, sp.path), ctl: sp.ctl}
+	r := &Row{Path: sp.path, Label: sp.label, ctl: sp.ctl}
+	r.HelpLine, r.Help = helpText(s, sp.path)
 	v := valueText(s, sp.path)
 	switch sp.ctl {
 	case ctlDrop, ctlSegments:
@@ -229,7 +231,7 @@ func (f *Form) Sync(s scenario.Scenario) {
 	}
 	for _, r := range f.Rows {
 		v := valueText(s, r.Path)
-		r.Help = helpText(s, r.Path)
+		r.HelpLine, r.Help = helpText(s, r.Path)
 		if r.Text != nil {
 			r.Text.Unit = unitFor(s, r.Path) // a cost's follows the currency
 			r.Text.SetValue(v)
@@ -771,14 +773,13 @@ func (f *Form) layoutGroup(gi int, x, y, w float64, m Measurer, th Theme) float6
 		// One line of help, the full text while the row has the keyboard;
 		// a refusal always in full. The line is written to fit the
 		// narrowest column, so Elide only guards a narrower one.
-		line, full := splitHelp(r.Help)
 		switch err := r.Err(); {
 		case err != "":
 			r.help = Wrap(m, err, label, w)
 		case r.Focused():
-			r.help = Wrap(m, full, label, w)
+			r.help = Wrap(m, r.Help, label, w)
 		default:
-			r.help = []string{Elide(m, line, label, w)}
+			r.help = []string{Elide(m, r.HelpLine, label, w)}
 		}
 		bw := f.boxW
 		if r.ctl == ctlSegments {

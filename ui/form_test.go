@@ -392,7 +392,7 @@ func TestFormHelpIsOneLineUntilFocused(t *testing.T) {
 	view, screen := Rect{16, 64, 272, 3000}, Rect{0, 0, 760, 3100}
 	f.Layout(view, screen, fonts(t), Light())
 	long := f.Row("site.position") // its full help does not fit one line of 272 px
-	line, full := splitHelp(long.Help)
+	line, full := long.HelpLine, long.Help
 	if len(long.help) != 1 || long.help[0] != line || strings.HasSuffix(line, "…") {
 		t.Fatalf("unfocused help %q; want the short line %q whole", long.help, line)
 	}
