@@ -140,18 +140,12 @@ func New(o Options) (*App, error) {
 	a.mouseX, a.mouseY = -1, -1
 	a.redraw.commit(time.Now())
 	r, err := a.run(s)
-	if needsWeather(err) {
-		// The kept scenario names a weather file a new page does not have:
-		// show the demo, and open the scenario when the file is dropped.
-		// The page is not told of the demo, so the kept one stays kept.
-		a.form = NewForm(scenario.Demo())
-		if r, err = a.run(scenario.Demo()); err != nil {
-			return nil, err
-		}
-		a.setScenario(scenario.Demo(), r)
-		a.outbox = nil
-		a.waitForWeather(o.Scenario, "The kept scenario")
-		return a, nil
+	// A kept scenario that names a weather file a new page does not have
+	// waits for it, with the demo shown meanwhile.
+	waits := needsWeather(err)
+	if waits {
+		s = scenario.Demo()
+		r, err = a.run(s)
 	}
 	if err != nil {
 		return nil, err
@@ -159,6 +153,10 @@ func New(o Options) (*App, error) {
 	a.form = NewForm(s)
 	a.restoreOptions(o.KeptOptions)
 	a.setScenario(s, r)
+	if waits {
+		a.outbox = nil // the page is not told of the demo, so the kept scenario stays kept
+		a.waitForWeather(o.Scenario, "The kept scenario")
+	}
 	return a, nil
 }
 

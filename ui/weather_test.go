@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"fmt"
 	"os"
 	"testing"
 
@@ -100,13 +101,18 @@ func TestAppKeptScenarioNeedsWeather(t *testing.T) {
 	s.Name = "kept with weather"
 	s.Site.WeatherFile = "ohare.epw"
 	h := &host{}
-	a, err := New(Options{Host: h, Scenario: s.JSON()})
+	other := scenario.Demo()
+	other.Node.Vision.FPS = 2
+	kept := fmt.Sprintf(`{"format":%q,"options":[{"letter":"A","scenario":%s}]}`, keptFormat, other.JSON())
+	a, err := New(Options{Host: h, Scenario: s.JSON(), KeptOptions: []byte(kept)})
 	require.NoError(t, err, "a kept scenario whose weather is missing is not a broken one")
 	a.resize(1280, 720, 1)
 	tick(a, &Input{MouseX: -1, MouseY: -1})
 	assert.Equal(t, scenario.Demo().Name, a.scen.Name)
 	assert.Empty(t, h.changed, "the demo is not kept over the waiting scenario")
 	assert.Contains(t, a.Debug().Notice, "The kept scenario uses the weather file")
+	require.Len(t, a.kept, 1, "the kept options come back too")
+	assert.Equal(t, 2.0, a.kept[0].Scen.Node.Vision.FPS)
 
 	require.NoError(t, a.Open(readOhare(t), "ohare.epw"))
 	assert.Equal(t, s.Name, a.scen.Name)
